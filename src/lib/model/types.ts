@@ -1,0 +1,280 @@
+/**
+ * The Headroute document: plain, serialisable records keyed by id.
+ *
+ * All quantities are SI inside: metres, seconds, kilograms, kelvin, pascals.
+ * Pressures named `...Abs` are absolute, `...Gauge` are gauge (relative to the site's
+ * atmospheric pressure). Plan positions (x, y) are sheet units and never enter the physics.
+ */
+
+/** Identifier of a node, pipe, case or route; unique within its document. */
+export type Id = string;
+
+/** Liquid chosen for the project: one from the library, or defined by the user. */
+export type LiquidChoice =
+  | { kind: 'library'; id: string }
+  | {
+      kind: 'user';
+      name: string;
+      /** Property table against temperature, interpolated linearly; one row means constant values. */
+      table: UserLiquidRow[];
+      /** Critical pressure, Pa abs, for the control-valve FF factor; optional. */
+      criticalPressure?: number;
+    };
+
+/** One row of a user-defined liquid's property table. */
+export interface UserLiquidRow {
+  /** Temperature, K. */
+  temperature: number;
+  /** Density, kg/m³. */
+  density: number;
+  /** Dynamic viscosity, Pa·s. */
+  viscosity: number;
+  /** Vapour pressure, Pa abs. */
+  vapourPressure: number;
+}
+
+/** A connection end: a node and one of its ports. */
+export interface PortRef {
+  node: Id;
+  port: string;
+}
+
+interface NodeBase {
+  id: Id;
+  name: string;
+  /** Plan position on the sheet, sheet units (schematic). */
+  x: number;
+  y: number;
+  /** Elevation of the node's centreline (vessel: its bottom), m. */
+  z: number;
+}
+
+/** A vessel nozzle: a port with its own elevation. */
+export interface Nozzle {
+  /** Port name, unique within the vessel. */
+  id: string;
+  /** Nozzle centreline elevation, m. */
+  z: number;
+  /** Loss coefficient when liquid leaves the vessel into the pipe (pipe entrance). */
+  entranceK: number;
+  /** Loss coefficient when liquid enters the vessel from the pipe (pipe exit). */
+  exitK: number;
+}
+
+/** A tank or vessel: a fixed head at its liquid level (plus gas-space pressure if closed). */
+export interface Vessel extends NodeBase {
+  kind: 'vessel';
+  /** Open to atmosphere, or closed with a gas-space pressure. */
+  open: boolean;
+  /** Gas-space pressure, Pa abs; used when `open` is false. */
+  gasPressureAbs: number;
+  /** Liquid surface elevation, m. */
+  liquidLevel: number;
+  /** Height of the vessel shell above z, m (drawing and sanity checks only). */
+  height: number;
+  nozzles: Nozzle[];
+}
+
+/** One point of a pump's test curve at rated speed. */
+export interface PumpPoint {
+  /** Volumetric flow, m³/s. */
+  flow: number;
+  /** Value at that flow: head in m, NPSHr in m, or efficiency as a fraction 0–1. */
+  value: number;
+}
+
+/** A centrifugal pump. Ports: 'suction', 'discharge'. Never runs backwards. */
+export interface Pump extends NodeBase {
+  kind: 'pump';
+  /** Head against flow at rated speed. */
+  headCurve: PumpPoint[];
+  /** NPSH required against flow at rated speed. */
+  npshrCurve: PumpPoint[];
+  /** Efficiency (0–1) against flow at rated speed. */
+  efficiencyCurve: PumpPoint[];
+  /** Rated speed, rpm. */
+  ratedSpeed: number;
+  /** Running speed, rpm (affinity laws). */
+  speed: number;
+  /** Off means closed: no flow. */
+  running: boolean;
+  /** Rating uses the curve; duty fixes `dutyFlow` and reports the head the pump must give. */
+  mode: 'rating' | 'duty';
+  /** Duty flow, m³/s; used when mode is 'duty'. */
+  dutyFlow: number;
+}
+
+/** Fitting types known to the loss library. */
+export type FittingType =
+  | 'elbow-90-standard'
+  | 'elbow-90-long-radius'
+  | 'elbow-45-standard'
+  | 'elbow-45-long-radius'
+  | 'tee-run'
+  | 'tee-branch'
+  | 'gate-valve'
+  | 'globe-valve'
+  | 'ball-valve'
+  | 'butterfly-valve'
+  | 'swing-check-valve'
+  | 'lift-check-valve'
+  | 'strainer'
+  | 'flow-meter'
+  | 'reducer'
+  | 'expander'
+  | 'restriction-orifice';
+
+/** How a fitting's loss coefficient is found. */
+export type LossMethod = 'fixed' | '2K' | '3K';
+
+/**
+ * An inline fitting, manual valve, check valve, strainer, meter, reducer/expander or
+ * restriction orifice. Ports: 'in', 'out'. A tee is drawn as a junction plus a fitting of
+ * type tee-run or tee-branch on the leg it applies to.
+ */
+export interface Fitting extends NodeBase {
+  kind: 'fitting';
+  fittingType: FittingType;
+  lossMethod: LossMethod;
+  /** Loss coefficient used when lossMethod is 'fixed' (referred to the inlet velocity). */
+  fixedK: number;
+  /** Manual valves: open or shut. Check valves are always free to close on reverse flow. */
+  closed: boolean;
+  /** Reducer/expander: inlet and outlet inner diameters, m. */
+  inletDiameter?: number;
+  outletDiameter?: number;
+  /** Reducer/expander: included cone angle, degrees (180 = sudden). */
+  coneAngle?: number;
+  /** Restriction orifice: bore diameter, m. */
+  boreDiameter?: number;
+}
+
+/** Control-valve inherent characteristic. */
+export type ValveCharacteristic = 'linear' | 'equal-percentage' | 'quick-opening';
+
+/** A control valve sized by IEC 60534-2-1. Ports: 'in', 'out'. */
+export interface ControlValve extends NodeBase {
+  kind: 'control-valve';
+  /** Rated flow coefficient at full opening, in the unit given. */
+  ratedCoefficient: number;
+  coefficientUnit: 'Kv' | 'Cv';
+  characteristic: ValveCharacteristic;
+  /** Inherent rangeability (e.g. 50). */
+  rangeability: number;
+  /** Travel, 0 (shut) to 1 (fully open). */
+  opening: number;
+  /** Liquid pressure recovery factor FL (IEC 60534-2-1). */
+  pressureRecoveryFactor: number;
+}
+
+/** A route vertex whose only job is to carry an elevation. Ports: 'in', 'out'. */
+export interface Waypoint extends NodeBase {
+  kind: 'waypoint';
+}
+
+/** A branch point where several pipes meet. Port 'hub' takes any number of pipes. */
+export interface Junction extends NodeBase {
+  kind: 'junction';
+}
+
+/** A fixed pressure at a point (a header, a battery limit). Port: 'p'. */
+export interface Boundary extends NodeBase {
+  kind: 'boundary';
+  /** Fixed pressure, Pa abs. */
+  pressureAbs: number;
+}
+
+/** Any node on the sheet. */
+export type SheetNode = Vessel | Pump | Fitting | ControlValve | Waypoint | Junction | Boundary;
+export type NodeKind = SheetNode['kind'];
+
+/** Pipe bore: from a catalogue size and schedule, or typed in. */
+export type PipeBore =
+  | { mode: 'catalogue'; nominalSize: string; schedule: string }
+  | { mode: 'typed'; innerDiameter: number };
+
+/** A pipe: a connection record between two ports. Flow is positive from `from` to `to`. */
+export interface Pipe {
+  id: Id;
+  kind: 'pipe';
+  name: string;
+  from: PortRef;
+  to: PortRef;
+  /** Developed length, m. */
+  length: number;
+  bore: PipeBore;
+  /** Material key in the roughness table. */
+  material: string;
+  /** Absolute roughness override, m; null uses the material's. */
+  roughness: number | null;
+  /** Design pressure, Pa gauge; null when not set. */
+  designPressureGauge: number | null;
+}
+
+/** NPSH margin rule: both must hold. */
+export interface NpshMarginRule {
+  /** Minimum NPSHa/NPSHr. */
+  ratio: number;
+  /** Minimum NPSHa − NPSHr, m. */
+  metres: number;
+}
+
+/** Velocity guidance, m/s. */
+export interface VelocityGuidance {
+  suctionMax: number;
+  dischargeMin: number;
+  dischargeMax: number;
+}
+
+/** Project-wide settings. */
+export interface ProjectSettings {
+  liquid: LiquidChoice;
+  /** Liquid temperature, K. */
+  temperature: number;
+  /** Site elevation above sea level, m (ISA atmosphere). */
+  siteElevation: number;
+  /** Typed atmospheric pressure, Pa abs; null uses the ISA value at the site elevation. */
+  atmosphericPressureOverride: number | null;
+  unitSystem: 'SI' | 'US';
+  npshMargin: NpshMarginRule;
+  velocityGuidance: VelocityGuidance;
+}
+
+/** Overrides a case applies on top of the base document. Absent means "as the base". */
+export interface CaseOverrides {
+  liquid?: LiquidChoice;
+  temperature?: number;
+  atmosphericPressure?: number;
+  vessels?: Record<Id, { liquidLevel?: number; gasPressureAbs?: number }>;
+  pumps?: Record<
+    Id,
+    { running?: boolean; speed?: number; mode?: 'rating' | 'duty'; dutyFlow?: number }
+  >;
+  controlValves?: Record<Id, { opening?: number }>;
+}
+
+/** A named set of overrides (an operating case). */
+export interface Case {
+  id: Id;
+  name: string;
+  overrides: CaseOverrides;
+}
+
+/** A stored route: the nodes it passes, in order of flow. */
+export interface Route {
+  id: Id;
+  name: string;
+  nodes: Id[];
+}
+
+/** The project document. */
+export interface HeadrouteDocument {
+  format: 'headroute';
+  version: number;
+  name: string;
+  settings: ProjectSettings;
+  nodes: Record<Id, SheetNode>;
+  pipes: Record<Id, Pipe>;
+  cases: Record<Id, Case>;
+  routes: Record<Id, Route>;
+}
