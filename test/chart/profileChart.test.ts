@@ -89,6 +89,18 @@ describe('profileGeometry', () => {
     expect(g.ticks.x.every((t) => t.value >= 100 && t.value <= 150)).toBe(true);
   });
 
+  it('holds the elevation scale still when given the range it showed', () => {
+    const first = profileGeometry(demoProfile(), SIZE, { system: 'SI' });
+    const raised = demoProfile();
+    for (const s of raised.stations) if (s.elementId === 'W1') s.elevation = 60;
+    const held = profileGeometry(raised, SIZE, {
+      system: 'SI',
+      elevationWindow: first.elevationRange,
+    });
+    expect(held.y(17)).toBeCloseTo(first.y(17), 9);
+    expect(held.elevationAt(first.y(42))).toBeCloseTo(42, 9);
+  });
+
   it('places the marked spans, element labels and the pump NPSH note', () => {
     const doc = demoDocument();
     const g = profileGeometry(demoProfile(), SIZE, {

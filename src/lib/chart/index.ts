@@ -2,6 +2,7 @@
 export * from './markedSpans';
 export * from './labelLanes';
 export * from './readout';
+export * from './chainageWindow';
 export * from './profileChart';
 export * from './profileStyle';
 export * from './exportMeta';

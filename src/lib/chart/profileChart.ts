@@ -36,6 +36,8 @@ export interface ProfileChartOptions {
   pumps?: Record<Id, PumpResult>;
   /** Visible chainage window, m (zoom and pan); the whole route when absent. */
   chainageWindow?: [number, number];
+  /** Fixed elevation range, m (kept while a waypoint is dragged); fitted to the profile when absent. */
+  elevationWindow?: [number, number];
   margin?: Partial<ChartMargin>;
   /** Font size of labels, px. */
   fontSize?: number;
@@ -142,6 +144,8 @@ export interface ProfileGeometry {
   axisTitles: { x: string; y: string };
   /** Full chainage range of the route, m. */
   chainageRange: [number, number];
+  /** Elevation range shown, m (pass back as elevationWindow to hold the scale still). */
+  elevationRange: [number, number];
 }
 
 const DEFAULT_MARGIN: ChartMargin = { top: 44, right: 20, bottom: 92, left: 64 };
@@ -182,10 +186,12 @@ export function profileGeometry(
   const heads = stations.flatMap((s) => [s.elevation, s.hgl, s.egl, s.vapourLine]);
   const [h0, h1] = finiteExtent(heads) ?? [0, 1];
   const pad = Math.max((h1 - h0) * 0.08, 0.5);
-  const yScale = scaleLinear()
-    .domain([elev(h0 - pad), elev(h1 + pad)])
-    .range([plot.top + plot.height, plot.top])
-    .nice();
+  const yScale = scaleLinear().range([plot.top + plot.height, plot.top]);
+  if (options.elevationWindow) {
+    yScale.domain(options.elevationWindow.map(elev));
+  } else {
+    yScale.domain([elev(h0 - pad), elev(h1 + pad)]).nice();
+  }
 
   const x = (c: number) => xScale(len(c));
   const y = (h: number) => yScale(elev(h));
@@ -257,6 +263,7 @@ export function profileGeometry(
     ticks,
     axisTitles,
     chainageRange,
+    elevationRange: [elevationAt(plot.top + plot.height), elevationAt(plot.top)],
   };
 }
 
