@@ -59,6 +59,8 @@ export interface Nozzle {
   entranceK: number;
   /** Loss coefficient when liquid enters the vessel from the pipe (pipe exit). */
   exitK: number;
+  /** Shell side the nozzle is drawn on (drawing only); absent uses the default in ports.ts. */
+  side?: 'left' | 'right';
 }
 
 /** A tank or vessel: a fixed head at its liquid level (plus gas-space pressure if closed). */

@@ -1,0 +1,22 @@
+/** Size limits on a project file, so a hostile or broken file cannot exhaust the browser. */
+
+/** Largest project file accepted, characters of JSON text (about 20 MB). */
+export const MAX_FILE_CHARS = 20 * 1024 * 1024;
+/** Most nodes plus pipes in one document. */
+export const MAX_ELEMENTS = 20_000;
+/** Most cases, and most stored routes, in one document. */
+export const MAX_CASES = 500;
+export const MAX_ROUTES = 500;
+/** Longest name (document, node, pipe, case, route), characters. */
+export const MAX_NAME_LENGTH = 200;
+/** Longest short text field (catalogue size, schedule, material key, liquid id). */
+export const MAX_SHORT_TEXT = 40;
+/** Most points on one pump curve, nozzles on a vessel, rows in a liquid table. */
+export const MAX_CURVE_POINTS = 50;
+export const MAX_NOZZLES = 50;
+export const MAX_TABLE_ROWS = 200;
+/** Deepest nesting of objects and arrays in the JSON text. */
+export const MAX_DEPTH = 16;
+/** Largest magnitude of a sheet coordinate, sheet units, and of an elevation, m. */
+export const MAX_COORDINATE = 1e7;
+export const MAX_ELEVATION = 1e4;

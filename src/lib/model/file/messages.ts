@@ -1,0 +1,143 @@
+/**
+ * Schema issues turned into plain words with a JSON path and the element they belong to.
+ */
+import type * as v from 'valibot';
+import { NODE_KIND_LABEL } from '../labels';
+import { pathKey, type DocumentProblem } from '../integrity';
+import type { NodeKind } from '../types';
+
+type Issue = v.BaseIssue<unknown>;
+
+const MAX_QUOTE = 40;
+
+/** A value in words, short enough for a message (markup stays as literal text). */
+export function describeValue(value: unknown): string {
+  if (value === undefined) return 'missing';
+  if (value === null) return 'empty (null)';
+  if (typeof value === 'string') {
+    const text = value.length > MAX_QUOTE ? `${value.slice(0, MAX_QUOTE)}…` : value;
+    return `the text "${text}"`;
+  }
+  if (typeof value === 'number') return String(value);
+  if (typeof value === 'boolean') return value ? 'true' : 'false';
+  if (Array.isArray(value)) return 'a list';
+  return 'an object';
+}
+
+const EXPECTED_WORDS: Record<string, string> = {
+  number: 'a number',
+  string: 'text',
+  boolean: 'true or false',
+  object: 'an object',
+  array: 'a list',
+  record: 'an object of records',
+};
+
+function lengthOf(input: unknown): number {
+  return typeof input === 'string' || Array.isArray(input) ? input.length : 0;
+}
+
+/** The path of an issue as a string such as `nodes.P1.headCurve[0].flow`. */
+export function issuePath(issue: Issue): string {
+  const keys = (issue.path ?? []).map((item) => item.key as string | number);
+  return keys
+    .map((key, i) => {
+      const part = pathKey(key);
+      return i === 0 && part.startsWith('.') ? part.slice(1) : part;
+    })
+    .join('');
+}
+
+function fieldName(issue: Issue): string {
+  const path = issue.path ?? [];
+  const last = path[path.length - 1];
+  if (!last) return 'The file';
+  if (typeof last.key === 'number') {
+    const parent = path[path.length - 2];
+    return parent ? `Entry ${last.key + 1} of "${String(parent.key)}"` : `Entry ${last.key + 1}`;
+  }
+  return `"${String(last.key)}"`;
+}
+
+/** One schema issue in plain words. */
+export function describeIssue(issue: Issue): string {
+  const field = fieldName(issue);
+  const got = describeValue(issue.input);
+  const req = (issue as { requirement?: unknown }).requirement;
+  const keyIssue = issue.path?.[issue.path.length - 1]?.origin === 'key';
+  switch (issue.type) {
+    case 'finite':
+      return `${field} must be a finite number, but is ${got}.`;
+    case 'gt_value':
+      return `${field} must be greater than ${String(req)}, but is ${got}.`;
+    case 'min_value':
+      return `${field} must be at least ${String(req)}, but is ${got}.`;
+    case 'max_value':
+      return `${field} must be at most ${String(req)}, but is ${got}.`;
+    case 'max_length':
+      return typeof issue.input === 'string'
+        ? `${field} is too long: ${lengthOf(issue.input)} characters, at most ${String(req)} allowed.`
+        : `${field} has too many entries: ${lengthOf(issue.input)}, at most ${String(req)} allowed.`;
+    case 'min_length':
+      return typeof issue.input === 'string'
+        ? `${field} must not be empty.`
+        : `${field} needs at least ${String(req)} ${req === 1 ? 'entry' : 'entries'}.`;
+    case 'max_entries':
+      return `${field} has too many records, at most ${String(req)} allowed.`;
+    case 'regex':
+      return keyIssue
+        ? `The record key ${got} is not a valid id (1–64 letters, digits, "_", "-" or ".", starting with a letter or digit).`
+        : `${field} is not a valid id: ${got} (ids are 1–64 letters, digits, "_", "-" or ".", starting with a letter or digit).`;
+    case 'picklist':
+    case 'literal':
+    case 'variant':
+      if (issue.input === undefined) return `${field} is missing.`;
+      return `${field} is ${got}, which is not one of the allowed values ${issue.expected ?? ''}.`.replace(
+        ' .',
+        '.',
+      );
+    default: {
+      if (issue.input === undefined) return `${field} is missing.`;
+      const expected = EXPECTED_WORDS[issue.type] ?? issue.expected ?? issue.type;
+      return `${field} should be ${expected}, but is ${got}.`;
+    }
+  }
+}
+
+function recordWords(collection: string, key: string, record: unknown): string {
+  const r = record && typeof record === 'object' ? (record as Record<string, unknown>) : {};
+  const name = typeof r.name === 'string' ? r.name.slice(0, MAX_QUOTE) : '';
+  let kind: string;
+  if (collection === 'nodes') {
+    kind =
+      typeof r.kind === 'string' && Object.hasOwn(NODE_KIND_LABEL, r.kind)
+        ? NODE_KIND_LABEL[r.kind as NodeKind]
+        : 'Node';
+  } else {
+    kind = { pipes: 'Pipe', cases: 'Case', routes: 'Route' }[collection] ?? 'Record';
+  }
+  return name !== '' && name !== key ? `${kind} "${name}" (${key})` : `${kind} ${key}`;
+}
+
+/** The element an issue belongs to, in words, when its path starts inside a collection. */
+export function issueElement(issue: Issue, root: unknown): string | undefined {
+  const path = issue.path ?? [];
+  const [first, second] = path;
+  if (!first || !second || typeof first.key !== 'string' || typeof second.key !== 'string') {
+    if (first?.key === 'settings') return 'Project settings';
+    return undefined;
+  }
+  if (!['nodes', 'pipes', 'cases', 'routes'].includes(first.key)) {
+    return first.key === 'settings' ? 'Project settings' : undefined;
+  }
+  const collection = (root as Record<string, Record<string, unknown>>)[first.key];
+  return recordWords(first.key, second.key, collection?.[second.key]);
+}
+
+/** A schema issue as a document problem. */
+export function issueToProblem(issue: Issue, root: unknown): DocumentProblem {
+  const element = issueElement(issue, root);
+  const problem: DocumentProblem = { path: issuePath(issue) || '$', message: describeIssue(issue) };
+  if (element) problem.element = element;
+  return problem;
+}

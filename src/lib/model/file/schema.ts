@@ -1,0 +1,261 @@
+/**
+ * The valibot schema of the document (current version). It checks shapes, types, finite numbers,
+ * signs and sizes; links between records (pipe ends, route nodes, case targets) are checked by
+ * ../integrity.ts after this schema passes.
+ */
+import * as v from 'valibot';
+import { ID_PATTERN } from '../ids';
+import {
+  MAX_CASES,
+  MAX_COORDINATE,
+  MAX_CURVE_POINTS,
+  MAX_ELEVATION,
+  MAX_NAME_LENGTH,
+  MAX_NOZZLES,
+  MAX_ROUTES,
+  MAX_SHORT_TEXT,
+  MAX_TABLE_ROWS,
+  MAX_ELEMENTS,
+} from './limits';
+import type { Case, HeadrouteDocument, Pipe, ProjectSettings, Route, SheetNode } from '../types';
+
+const finite = v.pipe(v.number(), v.finite());
+const positive = v.pipe(v.number(), v.finite(), v.gtValue(0));
+const nonNegative = v.pipe(v.number(), v.finite(), v.minValue(0));
+const fraction = v.pipe(v.number(), v.finite(), v.minValue(0), v.maxValue(1));
+const coordinate = v.pipe(
+  v.number(),
+  v.finite(),
+  v.minValue(-MAX_COORDINATE),
+  v.maxValue(MAX_COORDINATE),
+);
+const elevation = v.pipe(
+  v.number(),
+  v.finite(),
+  v.minValue(-MAX_ELEVATION),
+  v.maxValue(MAX_ELEVATION),
+);
+const name = v.pipe(v.string(), v.maxLength(MAX_NAME_LENGTH));
+const shortText = v.pipe(v.string(), v.minLength(1), v.maxLength(MAX_SHORT_TEXT));
+
+/** An element id. */
+export const IdSchema = v.pipe(v.string(), v.regex(ID_PATTERN));
+
+const portRef = v.object({ node: IdSchema, port: IdSchema });
+
+const nodeBase = { id: IdSchema, name, x: coordinate, y: coordinate, z: elevation };
+
+const nozzle = v.object({
+  id: IdSchema,
+  z: elevation,
+  entranceK: nonNegative,
+  exitK: nonNegative,
+  side: v.optional(v.picklist(['left', 'right'])),
+});
+
+const pumpPoint = v.object({ flow: nonNegative, value: nonNegative });
+const curve = (min: number) =>
+  v.pipe(v.array(pumpPoint), v.minLength(min), v.maxLength(MAX_CURVE_POINTS));
+
+const VesselSchema = v.object({
+  ...nodeBase,
+  kind: v.literal('vessel'),
+  open: v.boolean(),
+  gasPressureAbs: positive,
+  liquidLevel: elevation,
+  height: nonNegative,
+  nozzles: v.pipe(v.array(nozzle), v.minLength(1), v.maxLength(MAX_NOZZLES)),
+});
+
+const PumpSchema = v.object({
+  ...nodeBase,
+  kind: v.literal('pump'),
+  headCurve: curve(1),
+  npshrCurve: curve(0),
+  efficiencyCurve: v.pipe(
+    v.array(v.object({ flow: nonNegative, value: fraction })),
+    v.maxLength(MAX_CURVE_POINTS),
+  ),
+  ratedSpeed: positive,
+  speed: positive,
+  running: v.boolean(),
+  mode: v.picklist(['rating', 'duty']),
+  dutyFlow: nonNegative,
+});
+
+/** Fitting types known to the loss library. */
+export const FITTING_TYPES = [
+  'elbow-90-standard',
+  'elbow-90-long-radius',
+  'elbow-45-standard',
+  'elbow-45-long-radius',
+  'tee-run',
+  'tee-branch',
+  'gate-valve',
+  'globe-valve',
+  'ball-valve',
+  'butterfly-valve',
+  'swing-check-valve',
+  'lift-check-valve',
+  'strainer',
+  'flow-meter',
+  'reducer',
+  'expander',
+  'restriction-orifice',
+] as const;
+
+const FittingSchema = v.object({
+  ...nodeBase,
+  kind: v.literal('fitting'),
+  fittingType: v.picklist(FITTING_TYPES),
+  lossMethod: v.picklist(['fixed', '2K', '3K']),
+  fixedK: nonNegative,
+  closed: v.boolean(),
+  inletDiameter: v.optional(positive),
+  outletDiameter: v.optional(positive),
+  coneAngle: v.optional(v.pipe(v.number(), v.finite(), v.gtValue(0), v.maxValue(180))),
+  boreDiameter: v.optional(positive),
+});
+
+const ControlValveSchema = v.object({
+  ...nodeBase,
+  kind: v.literal('control-valve'),
+  ratedCoefficient: positive,
+  coefficientUnit: v.picklist(['Kv', 'Cv']),
+  characteristic: v.picklist(['linear', 'equal-percentage', 'quick-opening']),
+  rangeability: v.pipe(v.number(), v.finite(), v.gtValue(1)),
+  opening: fraction,
+  pressureRecoveryFactor: v.pipe(v.number(), v.finite(), v.gtValue(0), v.maxValue(1)),
+});
+
+const WaypointSchema = v.object({ ...nodeBase, kind: v.literal('waypoint') });
+const JunctionSchema = v.object({ ...nodeBase, kind: v.literal('junction') });
+const BoundarySchema = v.object({
+  ...nodeBase,
+  kind: v.literal('boundary'),
+  pressureAbs: positive,
+});
+
+/** Any node, told apart by `kind`. */
+export const NodeSchema = v.variant('kind', [
+  VesselSchema,
+  PumpSchema,
+  FittingSchema,
+  ControlValveSchema,
+  WaypointSchema,
+  JunctionSchema,
+  BoundarySchema,
+]);
+
+const bore = v.variant('mode', [
+  v.object({ mode: v.literal('catalogue'), nominalSize: shortText, schedule: shortText }),
+  v.object({ mode: v.literal('typed'), innerDiameter: positive }),
+]);
+
+/** A pipe record. */
+export const PipeSchema = v.object({
+  id: IdSchema,
+  kind: v.literal('pipe'),
+  name,
+  from: portRef,
+  to: portRef,
+  length: positive,
+  bore,
+  material: shortText,
+  roughness: v.nullable(nonNegative),
+  designPressureGauge: v.nullable(finite),
+});
+
+const userLiquidRow = v.object({
+  temperature: positive,
+  density: positive,
+  viscosity: positive,
+  vapourPressure: nonNegative,
+});
+
+const liquid = v.variant('kind', [
+  v.object({ kind: v.literal('library'), id: shortText }),
+  v.object({
+    kind: v.literal('user'),
+    name,
+    table: v.pipe(v.array(userLiquidRow), v.minLength(1), v.maxLength(MAX_TABLE_ROWS)),
+    criticalPressure: v.optional(positive),
+  }),
+]);
+
+/** Project settings. */
+export const SettingsSchema = v.object({
+  liquid,
+  temperature: positive,
+  siteElevation: elevation,
+  atmosphericPressureOverride: v.nullable(positive),
+  unitSystem: v.picklist(['SI', 'US']),
+  npshMargin: v.object({
+    ratio: v.pipe(v.number(), v.finite(), v.minValue(1)),
+    metres: nonNegative,
+  }),
+  velocityGuidance: v.object({
+    suctionMax: positive,
+    dischargeMin: nonNegative,
+    dischargeMax: positive,
+  }),
+});
+
+const overrides = v.object({
+  liquid: v.optional(liquid),
+  temperature: v.optional(positive),
+  atmosphericPressure: v.optional(positive),
+  vessels: v.optional(
+    v.record(
+      IdSchema,
+      v.object({ liquidLevel: v.optional(elevation), gasPressureAbs: v.optional(positive) }),
+    ),
+  ),
+  pumps: v.optional(
+    v.record(
+      IdSchema,
+      v.object({
+        running: v.optional(v.boolean()),
+        speed: v.optional(positive),
+        mode: v.optional(v.picklist(['rating', 'duty'])),
+        dutyFlow: v.optional(nonNegative),
+      }),
+    ),
+  ),
+  controlValves: v.optional(v.record(IdSchema, v.object({ opening: v.optional(fraction) }))),
+});
+
+/** A case (named overrides). */
+export const CaseSchema = v.object({ id: IdSchema, name, overrides });
+
+/** A stored route. */
+export const RouteSchema = v.object({
+  id: IdSchema,
+  name,
+  nodes: v.pipe(v.array(IdSchema), v.minLength(2), v.maxLength(MAX_ELEMENTS)),
+});
+
+/** The whole document, current version. */
+export const DocumentSchema = v.object({
+  format: v.literal('headroute'),
+  version: v.number(),
+  name,
+  settings: SettingsSchema,
+  nodes: v.pipe(v.record(IdSchema, NodeSchema), v.maxEntries(MAX_ELEMENTS)),
+  pipes: v.pipe(v.record(IdSchema, PipeSchema), v.maxEntries(MAX_ELEMENTS)),
+  cases: v.pipe(v.record(IdSchema, CaseSchema), v.maxEntries(MAX_CASES)),
+  routes: v.pipe(v.record(IdSchema, RouteSchema), v.maxEntries(MAX_ROUTES)),
+});
+
+// Compile-time check that the schema's output is the contract's document type (both ways).
+type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : false) : false;
+const _nodeMatches: Same<v.InferOutput<typeof NodeSchema>, SheetNode> = true;
+const _pipeMatches: Same<v.InferOutput<typeof PipeSchema>, Pipe> = true;
+const _settingsMatch: Same<v.InferOutput<typeof SettingsSchema>, ProjectSettings> = true;
+const _caseMatches: Same<v.InferOutput<typeof CaseSchema>, Case> = true;
+const _routeMatches: Same<v.InferOutput<typeof RouteSchema>, Route> = true;
+const _docMatches: [v.InferOutput<typeof DocumentSchema>] extends [
+  Omit<HeadrouteDocument, 'format' | 'version'> & { format: 'headroute'; version: number },
+]
+  ? true
+  : false = true;

@@ -1,0 +1,5 @@
+/** The project-file format version this build writes; older versions are migrated on load. */
+export const CURRENT_VERSION = 1;
+
+/** The format tag every project file carries. */
+export const FORMAT_TAG = 'headroute';

@@ -1,0 +1,182 @@
+/**
+ * Undo and redo over immer patches. Each step keeps the patches and inverse patches of one user
+ * action; a gesture (a drag) squashes all its commands into one step, and a cancelled gesture
+ * rolls back. Loading a document (`reset`) is not undoable: it clears both stacks.
+ * `revision` grows with every change of `doc`, so results computed from a document can carry it.
+ */
+import { applyPatches, type Patch } from 'immer';
+import { applyCommand, type Command, type CommandError } from './commands/command';
+import type { HeadrouteDocument, Id } from './types';
+
+/** One undo step. */
+export interface HistoryStep {
+  label: string;
+  patches: Patch[];
+  inversePatches: Patch[];
+}
+
+interface Gesture {
+  depth: number;
+  start: HeadrouteDocument;
+  label: string;
+  patches: Patch[];
+  inverse: Patch[][];
+}
+
+/** Undo/redo history of one open document. */
+export class History {
+  #doc: HeadrouteDocument;
+  #revision = 0;
+  #undo: HistoryStep[] = [];
+  #redo: HistoryStep[] = [];
+  #gesture: Gesture | null = null;
+  #listeners = new Set<(doc: HeadrouteDocument, revision: number) => void>();
+  /** Most undo steps kept; the oldest are dropped beyond it. */
+  readonly limit: number;
+
+  constructor(doc: HeadrouteDocument, limit = 200) {
+    this.#doc = doc;
+    this.limit = Math.max(1, limit);
+  }
+
+  /** The current document (frozen; replace, never mutate). */
+  get doc(): HeadrouteDocument {
+    return this.#doc;
+  }
+
+  /** Counts every change of `doc`, including undo, redo and reset. */
+  get revision(): number {
+    return this.#revision;
+  }
+
+  get canUndo(): boolean {
+    return this.#undo.length > 0 || (this.#gesture?.patches.length ?? 0) > 0;
+  }
+
+  get canRedo(): boolean {
+    return this.#redo.length > 0 && this.#gesture === null;
+  }
+
+  /** Label of the step undo would revert, if any. */
+  get undoLabel(): string | undefined {
+    return this.#undo[this.#undo.length - 1]?.label;
+  }
+
+  /** Label of the step redo would repeat, if any. */
+  get redoLabel(): string | undefined {
+    return this.#redo[this.#redo.length - 1]?.label;
+  }
+
+  /** Number of steps on the undo stack (for tests and the UI). */
+  get undoDepth(): number {
+    return this.#undo.length;
+  }
+
+  /** Call `listener` after every change of the document; returns an unsubscribe function. */
+  subscribe(listener: (doc: HeadrouteDocument, revision: number) => void): () => void {
+    this.#listeners.add(listener);
+    return () => this.#listeners.delete(listener);
+  }
+
+  #set(doc: HeadrouteDocument) {
+    this.#doc = doc;
+    this.#revision++;
+    for (const listener of this.#listeners) listener(doc, this.#revision);
+  }
+
+  #push(step: HistoryStep) {
+    this.#undo.push(step);
+    if (this.#undo.length > this.limit) this.#undo.splice(0, this.#undo.length - this.limit);
+    this.#redo = [];
+  }
+
+  /**
+   * Apply a command. On success the document changes and (outside a gesture) one undo step is
+   * pushed; a command that changes nothing pushes nothing. On error nothing changes.
+   */
+  apply(command: Command): { ok: true; created: Id[] } | { ok: false; error: CommandError } {
+    const result = applyCommand(this.#doc, command);
+    if (!result.ok) return result;
+    if (result.patches.length === 0) return { ok: true, created: result.created };
+    if (this.#gesture) {
+      const g = this.#gesture;
+      if (g.patches.length === 0) g.label = command.label;
+      g.patches.push(...result.patches);
+      g.inverse.push(result.inversePatches);
+    } else {
+      this.#push({
+        label: command.label,
+        patches: result.patches,
+        inversePatches: result.inversePatches,
+      });
+    }
+    this.#set(result.doc);
+    return { ok: true, created: result.created };
+  }
+
+  /** Start a gesture: commands until `endGesture` become one undo step. Nests by counting. */
+  beginGesture(): void {
+    if (this.#gesture) {
+      this.#gesture.depth++;
+      return;
+    }
+    this.#gesture = { depth: 1, start: this.#doc, label: '', patches: [], inverse: [] };
+  }
+
+  /** End a gesture, pushing its commands as one undo step (none if nothing changed). */
+  endGesture(): void {
+    const g = this.#gesture;
+    if (!g) return;
+    if (--g.depth > 0) return;
+    this.#gesture = null;
+    if (g.patches.length === 0) return;
+    const inversePatches = g.inverse.reverse().flat();
+    this.#push({ label: g.label, patches: g.patches, inversePatches });
+  }
+
+  /** Abandon a gesture: the document returns to how it was when the gesture began. */
+  cancelGesture(): void {
+    const g = this.#gesture;
+    if (!g) return;
+    this.#gesture = null;
+    if (g.patches.length > 0) this.#set(g.start);
+  }
+
+  /** True while a gesture is open. */
+  get inGesture(): boolean {
+    return this.#gesture !== null;
+  }
+
+  /** Revert the last step (an open gesture is ended first). */
+  undo(): boolean {
+    if (this.#gesture) this.#closeGesture();
+    const step = this.#undo.pop();
+    if (!step) return false;
+    this.#redo.push(step);
+    this.#set(applyPatches(this.#doc, step.inversePatches));
+    return true;
+  }
+
+  /** Repeat the last undone step. */
+  redo(): boolean {
+    if (this.#gesture) this.#closeGesture();
+    const step = this.#redo.pop();
+    if (!step) return false;
+    this.#undo.push(step);
+    this.#set(applyPatches(this.#doc, step.patches));
+    return true;
+  }
+
+  #closeGesture() {
+    if (this.#gesture) this.#gesture.depth = 1;
+    this.endGesture();
+  }
+
+  /** Replace the document (new, open, restore). Not undoable: both stacks are cleared. */
+  reset(doc: HeadrouteDocument): void {
+    this.#gesture = null;
+    this.#undo = [];
+    this.#redo = [];
+    this.#set(doc);
+  }
+}

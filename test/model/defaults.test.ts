@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import { createDocument, createNode, createPipe } from '../../src/lib/model/defaults';
+import { validateDocument } from '../../src/lib/model/file/validate';
+import type { NodeKind } from '../../src/lib/model/types';
+
+const KINDS: NodeKind[] = [
+  'vessel',
+  'pump',
+  'fitting',
+  'control-valve',
+  'waypoint',
+  'junction',
+  'boundary',
+];
+
+describe('defaults', () => {
+  it('a new document is valid and empty', () => {
+    const doc = createDocument('New project');
+    expect(validateDocument(doc).ok).toBe(true);
+    expect(Object.keys(doc.nodes)).toHaveLength(0);
+    expect(doc.settings.liquid).toEqual({ kind: 'library', id: 'water' });
+    expect(doc.settings.temperature).toBeCloseTo(293.15, 9);
+  });
+
+  it.each(KINDS)('a default %s passes the schema', (kind) => {
+    const doc = createDocument('x');
+    const node = createNode(kind, { x: 10, y: 20 }, 'A1');
+    const result = validateDocument({ ...doc, nodes: { A1: node } });
+    expect(result.ok).toBe(true);
+    expect(node).toMatchObject({ id: 'A1', kind, x: 10, y: 20 });
+  });
+
+  it('a new pipe is 2" Sch 40 carbon steel, 10 m', () => {
+    const pipe = createPipe({ node: 'A', port: 'in' }, { node: 'B', port: 'out' }, 'L1');
+    expect(pipe.bore).toEqual({ mode: 'catalogue', nominalSize: '2', schedule: '40' });
+    expect(pipe.material).toBe('carbon-steel');
+    expect(pipe.length).toBe(10);
+  });
+
+  it('a new pump has about 30 m shut-off head and its best efficiency near 20 m³/h', () => {
+    const pump = createNode('pump', { x: 0, y: 0 }, 'P1');
+    if (pump.kind !== 'pump') throw new Error('not a pump');
+    const shutOff = pump.headCurve.find((p) => p.flow === 0);
+    expect(shutOff?.value).toBeCloseTo(30, 6);
+    const best = pump.efficiencyCurve.reduce((a, b) => (b.value > a.value ? b : a));
+    expect(best.flow * 3600).toBeCloseTo(20, 6);
+    // Head falls with flow (a stable curve).
+    for (let i = 1; i < pump.headCurve.length; i++) {
+      expect(pump.headCurve[i].value).toBeLessThan(pump.headCurve[i - 1].value);
+    }
+  });
+
+  it('a new vessel has nozzles inside its shell and a level between them', () => {
+    const vessel = createNode('vessel', { x: 0, y: 0 }, 'V1');
+    if (vessel.kind !== 'vessel') throw new Error('not a vessel');
+    expect(vessel.nozzles.length).toBeGreaterThanOrEqual(2);
+    for (const n of vessel.nozzles) {
+      expect(n.z).toBeGreaterThanOrEqual(vessel.z);
+      expect(n.z).toBeLessThanOrEqual(vessel.z + vessel.height);
+    }
+    expect(vessel.liquidLevel).toBeGreaterThan(vessel.nozzles[0].z);
+  });
+});
