@@ -14,38 +14,38 @@ const MIN_FRACTION = 0.01;
  * the pointer. Zooming out past the whole route gives the whole route.
  */
 export function zoomWindow(
-  window: ChainageWindow,
+  view: ChainageWindow,
   range: ChainageWindow,
   anchor: number,
   factor: number,
 ): ChainageWindow {
   const full = range[1] - range[0];
-  const width = Math.max(full * MIN_FRACTION, (window[1] - window[0]) * factor);
+  const width = Math.max(full * MIN_FRACTION, (view[1] - view[0]) * factor);
   if (width >= full) return [range[0], range[1]];
-  const t = (anchor - window[0]) / (window[1] - window[0]);
+  const t = (anchor - view[0]) / (view[1] - view[0]);
   const start = anchor - t * width;
   return clampWindow([start, start + width], range);
 }
 
 /** Moves the window by `delta` metres of chainage, stopping at the route ends. */
 export function panWindow(
-  window: ChainageWindow,
+  view: ChainageWindow,
   range: ChainageWindow,
   delta: number,
 ): ChainageWindow {
-  return clampWindow([window[0] + delta, window[1] + delta], range);
+  return clampWindow([view[0] + delta, view[1] + delta], range);
 }
 
 /** Shifts a window back inside the range without changing its width (unless it is wider). */
-export function clampWindow(window: ChainageWindow, range: ChainageWindow): ChainageWindow {
-  const width = window[1] - window[0];
+export function clampWindow(view: ChainageWindow, range: ChainageWindow): ChainageWindow {
+  const width = view[1] - view[0];
   if (width >= range[1] - range[0]) return [range[0], range[1]];
-  if (window[0] < range[0]) return [range[0], range[0] + width];
-  if (window[1] > range[1]) return [range[1] - width, range[1]];
-  return window;
+  if (view[0] < range[0]) return [range[0], range[0] + width];
+  if (view[1] > range[1]) return [range[1] - width, range[1]];
+  return view;
 }
 
-/** True when the window shows the whole range. */
-export function isWholeRoute(window: ChainageWindow, range: ChainageWindow): boolean {
-  return window[0] <= range[0] && window[1] >= range[1];
+/** True when the view shows the whole range. */
+export function isWholeRoute(view: ChainageWindow, range: ChainageWindow): boolean {
+  return view[0] <= range[0] && view[1] >= range[1];
 }

@@ -175,8 +175,8 @@ export function profileGeometry(
   };
 
   const chainageRange = finiteExtent(stations.map((s) => s.chainage)) ?? [0, 1];
-  const window = options.chainageWindow ?? chainageRange;
-  const [c0, c1] = window[1] > window[0] ? window : [window[0], window[0] + 1];
+  const shown = options.chainageWindow ?? chainageRange;
+  const [c0, c1] = shown[1] > shown[0] ? shown : [shown[0], shown[0] + 1];
   const len = (v: number) => toDisplay(v, 'length', system);
   const elev = (v: number) => toDisplay(v, 'elevation', system);
   const xScale = scaleLinear()
