@@ -30,7 +30,10 @@ export interface LiquidProperties {
   criticalPressure: number | null;
   /** Properties whose value lies outside the range its source (or table) covers. */
   extrapolated: Array<'density' | 'viscosity' | 'vapourPressure'>;
-  /** Temperatures, K, over which all three properties hold. */
+  /**
+   * Temperatures, K, over which all three properties hold without extrapolation (a one-row
+   * user table, constant values: 0 to Infinity; no usable data: NaN).
+   */
   validRange: { min: number; max: number };
 }
 

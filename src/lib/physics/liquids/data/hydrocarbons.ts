@@ -22,6 +22,7 @@ import {
 const crc = { normalBoilingPointSource: CRC_BOILING_POINT };
 const crcPc = { criticalPressureSource: CRC_CRITICAL_PRESSURE };
 
+/** Aromatics and n-alkanes, from Perry's 8th ed. */
 export const HYDROCARBONS: readonly LibraryLiquid[] = [
   defineLiquid({
     id: 'benzene',

@@ -20,6 +20,7 @@ import {
 const crc = { normalBoilingPointSource: CRC_BOILING_POINT };
 const crcPc = { criticalPressureSource: CRC_CRITICAL_PRESSURE };
 
+/** Alcohols, glycols, acetone, ethyl acetate and acetic acid, from Perry's 8th ed. */
 export const OXYGENATES: readonly LibraryLiquid[] = [
   defineLiquid({
     id: 'methanol',
