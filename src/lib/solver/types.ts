@@ -35,6 +35,18 @@ export interface PipeResult {
   /** Entrance/exit losses charged to this pipe at vessel nozzles, m. */
   endLosses: number;
   innerDiameter: number;
+  /** HGL at the pipe's `from` end, m (inside the pipe, after any entrance loss). */
+  headFrom?: number;
+  /** HGL at the pipe's `to` end, m (inside the pipe, before any exit loss). */
+  headTo?: number;
+  /** EGL at the pipe's `from` end, m. */
+  totalHeadFrom?: number;
+  /** EGL at the pipe's `to` end, m. */
+  totalHeadTo?: number;
+  /** Elevation of the pipe's `from` end (its port), m. */
+  elevationFrom?: number;
+  /** Elevation of the pipe's `to` end (its port), m. */
+  elevationTo?: number;
 }
 
 export interface PortResult {

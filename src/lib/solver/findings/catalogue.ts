@@ -1,0 +1,218 @@
+/**
+ * The one catalogue of findings: stable codes, their level, and the plain-words message of
+ * each. Every finding the solver (and the profile along a route) reports is built here.
+ * Messages name elements by their names; numbers are SI and rounded for reading.
+ */
+import type { Id } from '../../model/types';
+import type { Finding, FindingLevel } from '../types';
+
+/** Every finding code with its level. Codes are stable: files and tests refer to them. */
+export const FINDING_LEVELS = {
+  'no-fixed-head': 'stop',
+  'cut-off': 'stop',
+  'broken-connection': 'stop',
+  'invalid-input': 'stop',
+  'no-convergence': 'stop',
+  'below-vapour-pressure': 'stop',
+  'npsh-below-required': 'stop',
+  'control-valve-choked': 'stop',
+  'above-design-pressure': 'stop',
+  'pump-curve-missing': 'stop',
+  'unconnected-port': 'caution',
+  'npsh-margin-low': 'caution',
+  vacuum: 'caution',
+  'velocity-high': 'caution',
+  'velocity-low': 'caution',
+  'pump-off-bep': 'caution',
+  'pump-at-shutoff': 'caution',
+  'property-extrapolated': 'caution',
+  'unknown-case': 'caution',
+  'laminar-flow': 'note',
+  'transitional-flow': 'note',
+  'reversed-flow': 'note',
+  'non-return-closed': 'note',
+  'npshr-curve-missing': 'note',
+} as const satisfies Record<string, FindingLevel>;
+
+/** A stable finding code. */
+export type FindingCode = keyof typeof FINDING_LEVELS;
+
+/** A finding with its level taken from the catalogue. */
+export function finding(
+  code: FindingCode,
+  message: string,
+  elements: Id[],
+  chainage?: number,
+): Finding {
+  const result: Finding = { code, level: FINDING_LEVELS[code], message, elements };
+  if (chainage !== undefined && Number.isFinite(chainage)) result.chainage = chainage;
+  return result;
+}
+
+/** Quote an element's name for a message. */
+function q(name: string): string {
+  return `“${name}”`;
+}
+
+function list(names: string[], max = 6): string {
+  const shown = names.slice(0, max).map(q);
+  const more = names.length > max ? ` and ${names.length - max} more` : '';
+  return shown.join(', ') + more;
+}
+
+function at(chainage?: number): string {
+  return chainage !== undefined && Number.isFinite(chainage)
+    ? ` at chainage ${chainage.toFixed(1)} m`
+    : '';
+}
+
+function fixed(value: number, digits: number): string {
+  return Number.isFinite(value) ? value.toFixed(digits) : '–';
+}
+
+/** Message builders, one per code. Each returns a complete Finding. */
+export const findings = {
+  noFixedHead: (elements: Id[]) =>
+    finding(
+      'no-fixed-head',
+      'Nothing on the sheet fixes a head: add a vessel or a boundary so the flows and pressures can be found.',
+      elements,
+    ),
+  cutOff: (names: string[], elements: Id[]) =>
+    finding(
+      'cut-off',
+      `${list(names)} ${names.length === 1 ? 'is' : 'are'} not connected to any vessel or boundary, so ${names.length === 1 ? 'its' : 'their'} pressures cannot be found; connect them or remove them.`,
+      elements,
+    ),
+  brokenConnection: (pipeName: string, end: 'from' | 'to', node: string, port: string, id: Id) =>
+    finding(
+      'broken-connection',
+      `Pipe ${q(pipeName)}: its ${end === 'from' ? 'start' : 'end'} is on port “${port}” of “${node}”, which does not exist; the pipe is left out of the solve.`,
+      [id],
+    ),
+  invalidInput: (name: string, what: string, id: Id) =>
+    finding('invalid-input', `${q(name)}: ${what}; it is left out of the solve.`, [id]),
+  noConvergence: (iterations: number, residual: number, names: string[], elements: Id[]) =>
+    finding(
+      'no-convergence',
+      `The network solve did not settle after ${iterations} iterations (largest head imbalance ${fixed(residual, 4)} m${names.length ? `, worst at ${list(names, 3)}` : ''}); the figures shown are not a solution.`,
+      elements,
+    ),
+  belowVapourPressure: (
+    name: string,
+    where: string,
+    pAbs: number,
+    pv: number,
+    id: Id,
+    chainage?: number,
+  ) =>
+    finding(
+      'below-vapour-pressure',
+      `${q(name)}${where ? ` (${where})` : ''}${at(chainage)}: absolute pressure ${fixed(pAbs / 1000, 1)} kPa is below the vapour pressure ${fixed(pv / 1000, 1)} kPa. The liquid would flash or the column would separate here; the single-liquid-phase results beyond this point are not physical and only indicative.`,
+      [id],
+      chainage,
+    ),
+  npshBelowRequired: (name: string, npsha: number, npshr: number, id: Id) =>
+    finding(
+      'npsh-below-required',
+      `Pump ${q(name)}: NPSH available ${fixed(npsha, 2)} m is below NPSH required ${fixed(npshr, 2)} m; the pump will cavitate.`,
+      [id],
+    ),
+  npshMarginLow: (
+    name: string,
+    npsha: number,
+    npshr: number,
+    ruleRatio: number,
+    ruleMetres: number,
+    id: Id,
+  ) =>
+    finding(
+      'npsh-margin-low',
+      `Pump ${q(name)}: NPSH available ${fixed(npsha, 2)} m against ${fixed(npshr, 2)} m required (ratio ${fixed(npsha / npshr, 2)}, margin ${fixed(npsha - npshr, 2)} m) is inside the project's rule of at least ${fixed(ruleRatio, 2)} × and ${fixed(ruleMetres, 2)} m.`,
+      [id],
+    ),
+  controlValveChoked: (name: string, dp: number, dpChoked: number, id: Id) =>
+    finding(
+      'control-valve-choked',
+      `Control valve ${q(name)}: pressure drop ${fixed(dp / 1000, 1)} kPa exceeds the choked-flow limit ${fixed(dpChoked / 1000, 1)} kPa (IEC 60534-2-1); the flow cannot rise with more drop and the valve will cavitate or flash. The flow shown assumes no choking and is too high.`,
+      [id],
+    ),
+  aboveDesignPressure: (name: string, pGauge: number, design: number, id: Id, chainage?: number) =>
+    finding(
+      'above-design-pressure',
+      `Pipe ${q(name)}${at(chainage)}: pressure ${fixed(pGauge / 1e5, 2)} bar(g) is above its design pressure ${fixed(design / 1e5, 2)} bar(g).`,
+      [id],
+      chainage,
+    ),
+  pumpCurveMissing: (name: string, id: Id) =>
+    finding(
+      'pump-curve-missing',
+      `Pump ${q(name)} has no usable head curve, so it is treated as shut; give its curve points or run it in duty mode.`,
+      [id],
+    ),
+  unconnectedPort: (name: string, port: string, id: Id) =>
+    finding(
+      'unconnected-port',
+      `${q(name)} has nothing connected to its “${port}” port; it is treated as capped (no flow).`,
+      [id],
+    ),
+  vacuum: (name: string, pGauge: number, id: Id, chainage?: number) =>
+    finding(
+      'vacuum',
+      `Pipe ${q(name)}${at(chainage)} runs under vacuum (${fixed(pGauge / 1000, 1)} kPa(g), the HGL is below the pipe): air can leak in at joints and vents.`,
+      [id],
+      chainage,
+    ),
+  velocityHigh: (name: string, velocity: number, limit: number, suction: boolean, id: Id) =>
+    finding(
+      'velocity-high',
+      `Pipe ${q(name)}: velocity ${fixed(velocity, 2)} m/s is above the project's ${suction ? 'suction' : 'discharge'} guidance of ${fixed(limit, 2)} m/s (common practice).`,
+      [id],
+    ),
+  velocityLow: (name: string, velocity: number, limit: number, id: Id) =>
+    finding(
+      'velocity-low',
+      `Pipe ${q(name)}: velocity ${fixed(velocity, 2)} m/s is below the project's guidance of ${fixed(limit, 2)} m/s (common practice); solids may settle.`,
+      [id],
+    ),
+  pumpOffBep: (name: string, fraction: number, id: Id) =>
+    finding(
+      'pump-off-bep',
+      `Pump ${q(name)} runs at ${fixed(fraction * 100, 0)} % of its best-efficiency flow, outside 70–120 % (common practice): expect more vibration, recirculation or wear.`,
+      [id],
+    ),
+  pumpAtShutoff: (name: string, id: Id) =>
+    finding(
+      'pump-at-shutoff',
+      `Pump ${q(name)} runs but cannot overcome the head against it: it delivers no flow (its non-return holds).`,
+      [id],
+    ),
+  propertyExtrapolated: (liquid: string, properties: string[], temperature: number) =>
+    finding(
+      'property-extrapolated',
+      `${liquid}: ${properties.join(', ')} at ${fixed(temperature - 273.15, 1)} °C lies outside the range of its source and is extrapolated.`,
+      [],
+    ),
+  unknownCase: (caseId: string) =>
+    finding('unknown-case', `There is no case “${caseId}”; the base document was solved.`, []),
+  laminarFlow: (name: string, reynolds: number, id: Id) =>
+    finding('laminar-flow', `Pipe ${q(name)}: laminar flow (Re ${fixed(reynolds, 0)}).`, [id]),
+  transitionalFlow: (name: string, reynolds: number, id: Id) =>
+    finding(
+      'transitional-flow',
+      `Pipe ${q(name)}: transitional flow (Re ${fixed(reynolds, 0)}); its friction factor is an interpolation and uncertain.`,
+      [id],
+    ),
+  reversedFlow: (name: string, id: Id) =>
+    finding('reversed-flow', `Pipe ${q(name)}: the flow runs against its drawn direction.`, [id]),
+  nonReturnClosed: (name: string, id: Id) =>
+    finding('non-return-closed', `${q(name)} holds back reverse flow: it is closed (no flow).`, [
+      id,
+    ]),
+  npshrCurveMissing: (name: string, id: Id) =>
+    finding(
+      'npshr-curve-missing',
+      `Pump ${q(name)} has no NPSHr curve; its NPSH margin cannot be checked.`,
+      [id],
+    ),
+};

@@ -1,0 +1,164 @@
+/**
+ * Sheet-wide findings from a solved network: pressures against vapour pressure, vacuum and
+ * design pressure at every pipe end and node port; velocities against the project's guidance;
+ * pumps against NPSH and best efficiency; choked control valves; flow regimes and directions.
+ * Along a pipe the HGL and the centreline are both straight between the ends, so the lowest
+ * and highest pressures of a pipe are at its ends.
+ */
+import type { HeadrouteDocument, Id, ProjectSettings } from '../../model/types';
+import type { SolveFluid } from '../fluid';
+import type { HydraulicGraph } from '../network/build';
+import type { ElementResults } from '../results';
+import type { Finding } from '../types';
+import { findings } from './catalogue';
+import { pipeService } from './service';
+
+/** Best-efficiency band (fraction of BEP flow) outside which a pump gets a caution: 70–120 %, common practice. */
+export const BEP_BAND = { min: 0.7, max: 1.2 } as const;
+
+/** All findings that follow from the results. */
+export function sheetFindings(
+  doc: HeadrouteDocument,
+  settings: ProjectSettings,
+  graph: HydraulicGraph,
+  results: ElementResults,
+  fluid: SolveFluid,
+): Finding[] {
+  const out: Finding[] = [];
+  const pv = fluid.vapourPressure;
+  const pAtm = fluid.atmosphericPressure;
+  const rhoG = fluid.density * 9.80665;
+
+  if (fluid.extrapolated.length > 0) {
+    out.push(
+      findings.propertyExtrapolated(fluid.liquidName, fluid.extrapolated, fluid.temperature),
+    );
+  }
+
+  // Nodes: lowest port pressure against vapour pressure; a closed vessel's gas space too.
+  for (const node of Object.values(doc.nodes)) {
+    const result = results.nodes[node.id];
+    if (!result) continue;
+    let lowest: { p: number; port: string } | null = null;
+    for (const [port, r] of Object.entries(result.ports)) {
+      if (!graph.portPipes.has(`${node.id}\u0000${port}`) && node.kind !== 'vessel') continue;
+      if (lowest === null || r.pressureAbs < lowest.p) lowest = { p: r.pressureAbs, port };
+    }
+    if (node.kind === 'vessel') {
+      const surface = node.open ? pAtm : node.gasPressureAbs;
+      if (surface < pv)
+        out.push(findings.belowVapourPressure(node.name, 'gas space', surface, pv, node.id));
+      else if (lowest && lowest.p < pv) {
+        out.push(
+          findings.belowVapourPressure(node.name, `nozzle ${lowest.port}`, lowest.p, pv, node.id),
+        );
+      }
+    } else if (lowest && lowest.p < pv) {
+      const where =
+        node.kind === 'pump'
+          ? `${lowest.port}`
+          : node.kind === 'junction' || node.kind === 'waypoint'
+            ? ''
+            : `${lowest.port} port`;
+      out.push(findings.belowVapourPressure(node.name, where, lowest.p, pv, node.id));
+    }
+  }
+
+  const service = pipeService(doc, graph, results);
+  const guidance = settings.velocityGuidance;
+  for (const [id, gp] of graph.pipes) {
+    const r = results.pipes[id];
+    const name = gp.pipe.name;
+    const ends = [
+      { p: pAtm + rhoG * ((r.headFrom ?? 0) - gp.elevationFrom), label: 'start' },
+      { p: pAtm + rhoG * ((r.headTo ?? 0) - gp.elevationTo), label: 'end' },
+    ];
+    const low = ends[0].p <= ends[1].p ? ends[0] : ends[1];
+    const high = ends[0].p >= ends[1].p ? ends[0] : ends[1];
+    if (low.p < pv)
+      out.push(findings.belowVapourPressure(name, `at its ${low.label}`, low.p, pv, id));
+    else if (low.p < pAtm - 1e-6 * pAtm) out.push(findings.vacuum(name, low.p - pAtm, id));
+    const design = gp.pipe.designPressureGauge;
+    if (design !== null && high.p - pAtm > design)
+      out.push(findings.aboveDesignPressure(name, high.p - pAtm, design, id));
+
+    if (r.regime === 'no-flow') continue;
+    const speed = Math.abs(r.velocity);
+    const kind = service.get(id) ?? 'other';
+    if (kind === 'suction' && speed > guidance.suctionMax)
+      out.push(findings.velocityHigh(name, speed, guidance.suctionMax, true, id));
+    if (kind !== 'suction' && speed > guidance.dischargeMax)
+      out.push(findings.velocityHigh(name, speed, guidance.dischargeMax, false, id));
+    if (kind === 'discharge' && speed < guidance.dischargeMin)
+      out.push(findings.velocityLow(name, speed, guidance.dischargeMin, id));
+    if (r.regime === 'laminar') out.push(findings.laminarFlow(name, r.reynolds, id));
+    if (r.regime === 'transitional') out.push(findings.transitionalFlow(name, r.reynolds, id));
+    if (r.flow < 0) out.push(findings.reversedFlow(name, id));
+  }
+
+  out.push(...pumpFindings(doc, graph, results, settings));
+  for (const [id, cv] of Object.entries(results.controlValves)) {
+    if (cv.choked)
+      out.push(
+        findings.controlValveChoked(doc.nodes[id].name, cv.pressureDrop, cv.chokedPressureDrop, id),
+      );
+  }
+  for (const [id, k] of graph.nodeLink) {
+    const info = graph.links[k].info;
+    if (info?.kind !== 'fitting' || !info.nonReturn || info.closed) continue;
+    const flow = results.nodes[id]?.flow ?? 0;
+    if (isHeld(flow, results.nodes[id]?.headLoss ?? 0))
+      out.push(findings.nonReturnClosed(doc.nodes[id].name, id));
+  }
+  return out;
+}
+
+/** A non-return element is holding when its flow is reverse or nil and the head pushes backwards. */
+function isHeld(flow: number, headLoss: number): boolean {
+  return flow <= 1e-9 && headLoss < 0;
+}
+
+function pumpFindings(
+  doc: HeadrouteDocument,
+  graph: HydraulicGraph,
+  results: ElementResults,
+  settings: ProjectSettings,
+): Finding[] {
+  const out: Finding[] = [];
+  const rule = settings.npshMargin;
+  for (const [id, pump] of Object.entries(results.pumps)) {
+    const node = doc.nodes[id];
+    const k = graph.nodeLink.get(id as Id);
+    const info = k === undefined ? null : graph.links[k].info;
+    if (info?.kind !== 'pump' || !info.running) continue;
+    if (!info.duty && isHeld(pump.flow, -pump.head) && pump.flow <= 1e-9) {
+      out.push(findings.pumpAtShutoff(node.name, id));
+      continue;
+    }
+    if (info.npshrFit.form === 'empty') out.push(findings.npshrCurveMissing(node.name, id));
+    else if (pump.npshAvailable < pump.npshRequired) {
+      out.push(findings.npshBelowRequired(node.name, pump.npshAvailable, pump.npshRequired, id));
+    } else if (
+      pump.npshRequired > 0 &&
+      (pump.npshRatio < rule.ratio || pump.npshMargin < rule.metres)
+    ) {
+      out.push(
+        findings.npshMarginLow(
+          node.name,
+          pump.npshAvailable,
+          pump.npshRequired,
+          rule.ratio,
+          rule.metres,
+          id,
+        ),
+      );
+    }
+    if (
+      pump.bepFraction > 0 &&
+      (pump.bepFraction < BEP_BAND.min || pump.bepFraction > BEP_BAND.max)
+    ) {
+      out.push(findings.pumpOffBep(node.name, pump.bepFraction, id));
+    }
+  }
+  return out;
+}

@@ -1,0 +1,237 @@
+/**
+ * Head-loss laws of the links of the hydraulic graph. Heads at graph nodes are total heads
+ * (EGL, m of liquid); every law gives the total-head drop from a link's `from` node to its `to`
+ * node as a function of the flow (m³/s, positive from → to), and its slope.
+ *
+ * Energy equation with losses per unit weight (extended Bernoulli):
+ *   z₁ + p₁/ρg + v₁²/2g + h_pump = z₂ + p₂/ρg + v₂²/2g + h_loss,
+ * so across a link the EGL changes only by losses and pump head. The HGL (EGL − v²/2g) then
+ * steps by the velocity-head change wherever the bore changes, with or without loss.
+ */
+import { ISA_STANDARD_GRAVITY } from '../../physics/atmosphere';
+import {
+  darcyFrictionFactor,
+  LAMINAR_LIMIT_REYNOLDS,
+  reynoldsNumber,
+} from '../../physics/friction';
+
+/** Standard gravity, m/s² (ISO 2533 / CGPM 1901). */
+export const GRAVITY = ISA_STANDARD_GRAVITY;
+
+/**
+ * Resistance of a shut link, and of a non-return link (pump, check valve) against reverse
+ * flow, s/m²: h = R·Q. A closed element is a stiff linear resistance rather than a removed
+ * link, so the pressure in a blocked-in section still follows from the rest of the sheet; it
+ * passes |ΔH|/R, i.e. 1e-8 m³/s (0.036 L/h) for 100 m of head across it.
+ */
+export const CLOSED_RESISTANCE = 1e10;
+
+/** A link's head-loss law. */
+export interface LinkLaw {
+  /** Update coefficients that are lagged one iteration (Reynolds-dependent K) at this flow. */
+  refresh(flow: number): void;
+  /** EGL at `from` minus EGL at `to`, m, at this flow. */
+  headLoss(flow: number): number;
+  /** d(headLoss)/d(flow), s/m²; may be zero or negative, the iteration floors it. */
+  slope(flow: number): number;
+  /** A starting flow for the iteration, m³/s. */
+  readonly initialFlow: number;
+}
+
+/** Pipe cross-section area, m². */
+export function area(diameter: number): number {
+  return (Math.PI * diameter * diameter) / 4;
+}
+
+/** A shut element: h = R·Q. */
+export class ClosedLaw implements LinkLaw {
+  readonly initialFlow = 0;
+  refresh(): void {}
+  headLoss(flow: number): number {
+    return CLOSED_RESISTANCE * flow;
+  }
+  slope(): number {
+    return CLOSED_RESISTANCE;
+  }
+}
+
+/** Liquid properties a law needs. */
+export interface LawFluid {
+  density: number;
+  viscosity: number;
+}
+
+/**
+ * A pipe: Darcy–Weisbach friction h_f = f (L/D) v|v|/2g with the physics friction factor
+ * (Colebrook–White, 64/Re, interpolated transition); in laminar flow the equivalent linear
+ * Hagen–Poiseuille form h_f = 32 μ L v /(ρ g D²), which keeps the slope finite and non-zero at
+ * Q = 0 (the small-flow linearisation). Plus the entrance/exit loss K v|v|/2g where an end sits
+ * on a vessel nozzle or a boundary, K depending on the flow direction.
+ */
+export class PipeLaw implements LinkLaw {
+  readonly area: number;
+  readonly initialFlow: number;
+  private readonly laminarSlope: number;
+
+  /**
+   * @param diameter inner diameter, m
+   * @param length developed length, m
+   * @param relativeRoughness ε/D
+   * @param fluid density and viscosity
+   * @param kForward end-loss K for flow from → to (entrance at `from` plus exit at `to`)
+   * @param kReverse end-loss K for flow to → from
+   */
+  constructor(
+    readonly diameter: number,
+    readonly length: number,
+    readonly relativeRoughness: number,
+    private readonly fluid: LawFluid,
+    readonly kForward: number,
+    readonly kReverse: number,
+  ) {
+    this.area = area(diameter);
+    this.initialFlow = this.area * 1; // 1 m/s
+    // Hagen–Poiseuille: h = 32 μ L v /(ρ g D²), per unit flow (v = Q/A).
+    this.laminarSlope =
+      (32 * fluid.viscosity * length) / (fluid.density * GRAVITY * diameter * diameter * this.area);
+  }
+
+  refresh(): void {}
+
+  /** Reynolds number at this flow. */
+  reynolds(flow: number): number {
+    return reynoldsNumber(
+      flow / this.area,
+      this.diameter,
+      this.fluid.density,
+      this.fluid.viscosity,
+    );
+  }
+
+  /** Friction head loss, m, signed like the flow. */
+  friction(flow: number): number {
+    if (this.length === 0 || flow === 0) return 0;
+    const re = this.reynolds(flow);
+    if (re <= LAMINAR_LIMIT_REYNOLDS) return this.laminarSlope * flow;
+    const f = darcyFrictionFactor(re, this.relativeRoughness).factor;
+    const v = flow / this.area;
+    return (f * (this.length / this.diameter) * v * Math.abs(v)) / (2 * GRAVITY);
+  }
+
+  /** Entrance/exit loss at vessel or boundary ends, m, signed like the flow. */
+  endLoss(flow: number): number {
+    const k = flow >= 0 ? this.kForward : this.kReverse;
+    const v = flow / this.area;
+    return (k * v * Math.abs(v)) / (2 * GRAVITY);
+  }
+
+  headLoss(flow: number): number {
+    return this.friction(flow) + this.endLoss(flow);
+  }
+
+  slope(flow: number): number {
+    const k = flow >= 0 ? this.kForward : this.kReverse;
+    const endSlope = (2 * k * Math.abs(flow)) / (2 * GRAVITY * this.area * this.area);
+    if (this.length === 0) return endSlope;
+    if (this.reynolds(flow) <= LAMINAR_LIMIT_REYNOLDS) return this.laminarSlope + endSlope;
+    // Central difference: f varies with Re, so d(h_f)/dQ is not simply 2 h_f/Q.
+    const step = Math.abs(flow) * 1e-6;
+    const frictionSlope = (this.friction(flow + step) - this.friction(flow - step)) / (2 * step);
+    return frictionSlope + endSlope;
+  }
+}
+
+/**
+ * A local loss K v|v|/2g with K per direction (each referred to its own reference area), K
+ * taken from `coefficient` at the flow of the previous iteration (Reynolds-dependent K), and
+ * optionally a non-return: reverse flow meets the closed resistance.
+ */
+export class LocalLossLaw implements LinkLaw {
+  readonly initialFlow: number;
+  private kNow = 0;
+  private areaNow: number;
+
+  /**
+   * @param coefficient K and reference area (m²) for a flow (sign gives the direction)
+   * @param nonReturn true for check valves: reverse flow is held by CLOSED_RESISTANCE
+   * @param initialFlow starting flow, m³/s
+   */
+  constructor(
+    private readonly coefficient: (flow: number) => { k: number; area: number },
+    private readonly nonReturn: boolean,
+    initialFlow: number,
+  ) {
+    this.initialFlow = initialFlow;
+    const start = coefficient(initialFlow);
+    this.kNow = start.k;
+    this.areaNow = start.area;
+  }
+
+  /** The K in use (referred to the velocity in the reference area). */
+  get lossCoefficient(): number {
+    return this.kNow;
+  }
+
+  refresh(flow: number): void {
+    const { k, area } = this.coefficient(flow);
+    this.kNow = k;
+    this.areaNow = area;
+  }
+
+  headLoss(flow: number): number {
+    if (this.nonReturn && flow < 0) return CLOSED_RESISTANCE * flow;
+    const v = flow / this.areaNow;
+    return (this.kNow * v * Math.abs(v)) / (2 * GRAVITY);
+  }
+
+  slope(flow: number): number {
+    if (this.nonReturn && flow < 0) return CLOSED_RESISTANCE;
+    return (this.kNow * Math.abs(flow)) / (GRAVITY * this.areaNow * this.areaNow);
+  }
+}
+
+/**
+ * A control valve by IEC 60534-2-1 eq. (1) (turbulent, not choked): Δp = (ρ/ρ0)(Q/Kv)² bar,
+ * i.e. a quadratic law h = c·Q|Q| with c = Δp(1 m³/s)/(ρg). Choking is checked afterwards
+ * and reported as a finding.
+ */
+export class QuadraticLaw implements LinkLaw {
+  readonly initialFlow: number;
+  /** @param coefficient c in h = c·Q|Q|, s²/m⁵ */
+  constructor(
+    readonly coefficient: number,
+    initialFlow: number,
+  ) {
+    this.initialFlow = initialFlow;
+  }
+  refresh(): void {}
+  headLoss(flow: number): number {
+    return this.coefficient * flow * Math.abs(flow);
+  }
+  slope(flow: number): number {
+    return 2 * this.coefficient * Math.abs(flow);
+  }
+}
+
+/**
+ * A running centrifugal pump in rating mode: the total-head drop across it is −H(Q) for
+ * Q ≥ 0, H from the fitted curve at the running speed (affinity laws in physics/pump). It has a
+ * built-in non-return: for Q < 0 the law continues as −H(0) + R·Q with the closed resistance,
+ * so reverse flow is negligible and the law stays continuous and monotone.
+ */
+export class PumpLaw implements LinkLaw {
+  constructor(
+    private readonly head: (flow: number) => number,
+    private readonly headSlope: (flow: number) => number,
+    readonly initialFlow: number,
+  ) {}
+  refresh(): void {}
+  headLoss(flow: number): number {
+    if (flow < 0) return -this.head(0) + CLOSED_RESISTANCE * flow;
+    return -this.head(flow);
+  }
+  slope(flow: number): number {
+    if (flow < 0) return CLOSED_RESISTANCE;
+    return -this.headSlope(flow);
+  }
+}

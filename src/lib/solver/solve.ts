@@ -1,0 +1,90 @@
+/**
+ * `solve(document, caseId?)`: flows, heads and pressures over the whole sheet, with findings.
+ */
+import type { HeadrouteDocument, Id } from '../model/types';
+import { applyCase } from './applyCase';
+import { findings } from './findings/catalogue';
+import { sheetFindings } from './findings/sheet';
+import { solveFluid } from './fluid';
+import { buildGraph } from './network/build';
+import { gradientSolve } from './network/gga';
+import { activeParts } from './network/topology';
+import { elementResults } from './results';
+import type { Finding, SolveResult } from './types';
+
+/**
+ * Solves the document (in case `caseId`, or the base document) by the global gradient
+ * method over the whole sheet. Pure and never throws on a schema-valid document: problems
+ * come back as findings on the elements involved, and every number in the result is finite.
+ * Elements the solve could not reach (cut off, broken connections) have no entry in
+ * `pipes`/`nodes`; `converged` is false when the iteration did not settle.
+ */
+export function solve(doc: HeadrouteDocument, caseId?: Id | null): SolveResult {
+  const pre: Finding[] = [];
+  if (caseId !== null && caseId !== undefined && !Object.hasOwn(doc.cases, caseId)) {
+    pre.push(findings.unknownCase(caseId));
+  }
+  const working = applyCase(doc, caseId);
+  const fluid = solveFluid(working.settings);
+  const base: SolveResult = {
+    caseId: caseId ?? null,
+    converged: false,
+    iterations: 0,
+    residual: 0,
+    massImbalance: 0,
+    fluid: {
+      density: fluid.density,
+      viscosity: fluid.viscosity,
+      vapourPressure: fluid.vapourPressure,
+      atmosphericPressure: fluid.atmosphericPressure,
+      temperature: fluid.temperature,
+      liquidName: fluid.liquidName,
+    },
+    pipes: {},
+    nodes: {},
+    pumps: {},
+    controlValves: {},
+    findings: pre,
+  };
+  if (!fluid.usable) {
+    base.findings.push(
+      findings.invalidInput(
+        fluid.liquidName,
+        'its properties cannot be evaluated at the project temperature',
+        '',
+      ),
+    );
+    base.findings[base.findings.length - 1].elements = [];
+    return base;
+  }
+  try {
+    const graph = buildGraph(working, fluid);
+    const parts = activeParts(working, graph);
+    const outcome = gradientSolve(graph, parts.activeNode, parts.activeLink);
+    const results = elementResults(working, graph, outcome, parts.activeLink, fluid);
+    const result: SolveResult = {
+      ...base,
+      converged: outcome.converged,
+      iterations: outcome.iterations,
+      residual: outcome.residual,
+      massImbalance: outcome.massImbalance,
+      ...results,
+      findings: [...pre, ...graph.findings, ...parts.findings],
+    };
+    if (!outcome.converged) {
+      const worst = outcome.worstLinks.map((k) => graph.links[k].element);
+      const names = worst.map((id) => working.nodes[id]?.name ?? working.pipes[id]?.name ?? id);
+      result.findings.push(
+        findings.noConvergence(outcome.iterations, outcome.residual, names, worst),
+      );
+    }
+    result.findings.push(...sheetFindings(working, working.settings, graph, results, fluid));
+    return result;
+  } catch (error) {
+    // A defect, not an input problem: keep the app alive and say so.
+    const why = error instanceof Error ? error.message : String(error);
+    base.findings.push(findings.noConvergence(0, 0, [], []));
+    base.findings[base.findings.length - 1].message = `The solver failed (${why}); no results.`;
+    return base;
+  }
+}

@@ -1,0 +1,133 @@
+/**
+ * Small builders for test sheets, on top of the model's defaults.
+ */
+import { createDocument, createNode, createPipe } from '../../src/lib/model/defaults';
+import type {
+  Boundary,
+  Fitting,
+  HeadrouteDocument,
+  Id,
+  Pipe,
+  PortRef,
+  Pump,
+  SheetNode,
+  Vessel,
+} from '../../src/lib/model/types';
+import type { SolveResult } from '../../src/lib/solver/types';
+import { expect } from 'vitest';
+
+/** A document plus helpers that add elements to it. */
+export class Sheet {
+  readonly doc: HeadrouteDocument = createDocument('test');
+
+  node<T extends SheetNode>(kind: T['kind'], id: Id, props: Partial<T> = {}): T {
+    const node = { ...createNode(kind, { x: 0, y: 0 }, id), ...props } as T;
+    this.doc.nodes[id] = node;
+    return node;
+  }
+
+  /** An open vessel with one nozzle 'N1' at `nozzleZ`. */
+  vessel(
+    id: Id,
+    level: number,
+    props: Partial<Vessel> & { nozzleZ?: number; entranceK?: number; exitK?: number } = {},
+  ): Vessel {
+    const { nozzleZ = 0, entranceK = 0.5, exitK = 1, ...rest } = props;
+    return this.node<Vessel>('vessel', id, {
+      z: Math.min(0, nozzleZ),
+      liquidLevel: level,
+      height: Math.max(level, nozzleZ) + 2,
+      nozzles: [{ id: 'N1', z: nozzleZ, entranceK, exitK }],
+      ...rest,
+    });
+  }
+
+  boundary(id: Id, z: number, pressureAbs: number): Boundary {
+    return this.node<Boundary>('boundary', id, { z, pressureAbs });
+  }
+
+  pump(id: Id, props: Partial<Pump> = {}): Pump {
+    return this.node<Pump>('pump', id, props);
+  }
+
+  fitting(id: Id, props: Partial<Fitting> = {}): Fitting {
+    return this.node<Fitting>('fitting', id, props);
+  }
+
+  /** A pipe with a typed bore. */
+  pipe(
+    id: Id,
+    from: PortRef,
+    to: PortRef,
+    props: { length?: number; diameter?: number; roughness?: number } & Partial<Pipe> = {},
+  ): Pipe {
+    const { length = 10, diameter = 0.1, roughness = 4.5e-5, ...rest } = props;
+    const pipe: Pipe = {
+      ...createPipe(from, to, id),
+      length,
+      bore: { mode: 'typed', innerDiameter: diameter },
+      roughness,
+      ...rest,
+    };
+    this.doc.pipes[id] = pipe;
+    return pipe;
+  }
+}
+
+/** Port reference shorthand. */
+export const at = (node: Id, port: string): PortRef => ({ node, port });
+
+/** Every number anywhere in the result is finite. */
+export function expectAllFinite(value: unknown, path = 'result'): void {
+  if (typeof value === 'number') {
+    expect(Number.isFinite(value), `${path} = ${value}`).toBe(true);
+  } else if (Array.isArray(value)) {
+    value.forEach((v, i) => expectAllFinite(v, `${path}[${i}]`));
+  } else if (value !== null && typeof value === 'object') {
+    for (const [k, v] of Object.entries(value)) expectAllFinite(v, `${path}.${k}`);
+  }
+}
+
+/**
+ * Conservation checks on a converged result: continuity at every inner port to 1e-9 m³/s
+ * (pipes in and out of each two-port element and junction), and the EGL bookkeeping of every
+ * pipe and two-port element to 1e-6 m (EGL drop = friction + end losses, = headLoss of a node).
+ */
+export function expectConservation(doc: HeadrouteDocument, result: SolveResult): void {
+  expect(result.converged).toBe(true);
+  expect(result.massImbalance).toBeLessThan(1e-9);
+  // Continuity per port, from the pipe flows and the node flows.
+  const net = new Map<string, number>();
+  const add = (node: Id, port: string, q: number) => {
+    const n = doc.nodes[node];
+    const key = n.kind === 'waypoint' ? `${node}` : `${node}/${port}`;
+    net.set(key, (net.get(key) ?? 0) + q);
+  };
+  for (const [id, pipe] of Object.entries(doc.pipes)) {
+    const r = result.pipes[id];
+    if (!r) continue;
+    add(pipe.from.node, pipe.from.port, -r.flow);
+    add(pipe.to.node, pipe.to.port, r.flow);
+  }
+  for (const [id, node] of Object.entries(doc.nodes)) {
+    const r = result.nodes[id];
+    if (!r || r.flow === undefined) continue;
+    const [a, b] = node.kind === 'pump' ? ['suction', 'discharge'] : ['in', 'out'];
+    add(id, a, -r.flow);
+    add(id, b, r.flow);
+  }
+  for (const [key, q] of net) {
+    const nodeId = key.split('/')[0];
+    const kind = doc.nodes[nodeId].kind;
+    if (kind === 'vessel' || kind === 'boundary') continue;
+    expect(Math.abs(q), `continuity at ${key}`).toBeLessThan(1e-9);
+  }
+  // Energy: along each pipe, EGL drop = friction + end losses (signed by flow).
+  for (const [id] of Object.entries(doc.pipes)) {
+    const r = result.pipes[id];
+    if (!r) continue;
+    const sign = r.flow >= 0 ? 1 : -1;
+    const drop = (r.totalHeadFrom! - r.totalHeadTo!) * sign;
+    expect(Math.abs(drop - r.frictionLoss), `EGL along ${id}`).toBeLessThan(1e-6);
+  }
+}
