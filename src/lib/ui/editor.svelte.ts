@@ -1,0 +1,174 @@
+/**
+ * Editor state: the one store the sheet, shelf, details and findings read.
+ *
+ * The document lives in `$state.raw` and is replaced with each History result (never mutated).
+ * Selection, viewport, hover, tool and status are session state: never saved, never undone.
+ * Solve results carry the revision they were computed for (see solveRunner.ts).
+ */
+import { History } from '../model/history';
+import type { Command, CommandError } from '../model/commands';
+import { createDocument } from '../model/defaults';
+import type { HeadrouteDocument, Id } from '../model/types';
+import type { SolveResult } from '../solver/types';
+import { IDENTITY, type Viewport } from './sheet/viewport';
+import { createSolveRunner, type SolveRunner } from './solveRunner';
+
+/** A short message in the status line, optionally placed near the pointer. */
+export interface StatusMessage {
+  text: string;
+  level: 'info' | 'error';
+  at?: { x: number; y: number };
+  time: number;
+}
+
+/** Result of a solve tagged with the document revision it belongs to. */
+export interface TaggedResult {
+  revision: number;
+  result: SolveResult;
+}
+
+class Editor {
+  #history = new History(createDocument('Untitled project'));
+  #runner: SolveRunner | null = null;
+
+  /** The document; replaced on every change. */
+  doc = $state.raw<HeadrouteDocument>(this.#history.doc);
+  /** Revision of `doc` (increases on every change, including undo/redo/load). */
+  revision = $state(this.#history.revision);
+  canUndo = $state(false);
+  canRedo = $state(false);
+  /** Revision last saved or loaded; the project is unsaved when it differs. */
+  savedRevision = $state(this.#history.revision);
+  fileName = $state<string | null>(null);
+
+  selection = $state.raw<Id[]>([]);
+  hover = $state<Id | null>(null);
+  viewport = $state.raw<Viewport>(IDENTITY);
+  tool = $state<'select' | 'pipe'>('select');
+  status = $state.raw<StatusMessage | null>(null);
+  /** Operating case solved and shown (null = base case). */
+  caseId = $state<Id | null>(null);
+  /** Increases when the sheet should fit the drawing to the view (after a load). */
+  fitRequest = $state(0);
+
+  /** Latest solve result received (may belong to an older revision while a solve runs). */
+  tagged = $state.raw<TaggedResult | null>(null);
+  /** The result for the current document, or null while it is being solved. */
+  readonly result = $derived(
+    this.tagged && this.tagged.revision === this.revision ? this.tagged.result : null,
+  );
+  /** Latest result even if older than the document (drawn dimmed, marked as updating). */
+  readonly lastResult = $derived(this.tagged?.result ?? null);
+  readonly solving = $derived(this.tagged === null || this.tagged.revision !== this.revision);
+  readonly dirty = $derived(this.revision !== this.savedRevision);
+
+  /**
+   * Apply a command as one undo step (or part of the open gesture). Returns the ids it created,
+   * or false (with the reason in the status) when the command was refused.
+   */
+  dispatch(command: Command, at?: { x: number; y: number }): Id[] | false {
+    const outcome = this.#history.apply(command);
+    if (!outcome.ok) {
+      this.refuse(outcome.error, at);
+      return false;
+    }
+    this.#sync();
+    return outcome.created;
+  }
+
+  /** Show why a command was refused. */
+  refuse(error: CommandError, at?: { x: number; y: number }): void {
+    this.say(error.message, 'error', at);
+  }
+
+  /** Put a message in the status line. */
+  say(text: string, level: 'info' | 'error' = 'info', at?: { x: number; y: number }): void {
+    const status = { text, level, at, time: Date.now() };
+    this.status = status;
+    if (at) {
+      // The message near the pointer fades after a while; the status line keeps it.
+      setTimeout(() => {
+        if (this.status === status) this.status = { ...status, at: undefined };
+      }, 4000);
+    }
+  }
+
+  beginGesture(): void {
+    this.#history.beginGesture();
+  }
+  endGesture(): void {
+    this.#history.endGesture();
+    this.#sync();
+  }
+  cancelGesture(): void {
+    this.#history.cancelGesture();
+    this.#sync();
+  }
+
+  undo(): void {
+    this.#history.undo();
+    this.#sync();
+    this.#pruneSelection();
+  }
+  redo(): void {
+    this.#history.redo();
+    this.#sync();
+    this.#pruneSelection();
+  }
+
+  /** Replace the document (new, open, demo, restore): not undoable, clears history and selection. */
+  load(doc: HeadrouteDocument, fileName: string | null = null): void {
+    this.#history.reset(doc);
+    this.selection = [];
+    this.hover = null;
+    this.caseId = null;
+    this.fileName = fileName;
+    this.#sync();
+    this.savedRevision = this.revision;
+    this.fitRequest++;
+  }
+
+  /** Mark the current revision as saved. */
+  markSaved(fileName?: string): void {
+    this.savedRevision = this.revision;
+    if (fileName) this.fileName = fileName;
+  }
+
+  select(ids: Id[]): void {
+    this.selection = ids.filter((id) => this.#exists(id));
+  }
+
+  #exists(id: Id): boolean {
+    return Object.hasOwn(this.doc.nodes, id) || Object.hasOwn(this.doc.pipes, id);
+  }
+
+  #pruneSelection(): void {
+    if (this.selection.some((id) => !this.#exists(id))) this.select(this.selection);
+  }
+
+  #sync(): void {
+    const h = this.#history;
+    this.doc = h.doc;
+    this.revision = h.revision;
+    this.canUndo = h.canUndo;
+    this.canRedo = h.canRedo;
+    this.#requestSolve();
+  }
+
+  #requestSolve(): void {
+    this.#runner ??= createSolveRunner((tagged) => {
+      // Keep only the newest revision's result; a late reply for an older one is dropped.
+      if (!this.tagged || tagged.revision >= this.tagged.revision) this.tagged = tagged;
+    });
+    this.#runner.request(this.doc, this.revision, this.caseId);
+  }
+
+  /** Solve again (e.g. after the case changes). */
+  resolve(): void {
+    this.#requestSolve();
+  }
+}
+
+/** The app's single editor. */
+export const editor = new Editor();
+export type { Editor };

@@ -1,0 +1,85 @@
+/**
+ * Project files in the browser: new, open (picker or drop), save (download), the demo
+ * projects, autosave and its restore. Loading is never undoable; a refused file leaves the
+ * open project untouched.
+ */
+import { base } from '$app/paths';
+import { createDocument } from '../model/defaults';
+import { parseProjectFile, projectFileName, serializeProject } from '../model/file';
+import type { HeadrouteDocument } from '../model/types';
+import { editor } from './editor.svelte';
+
+/** Largest project file the app will read, bytes. */
+export const MAX_FILE_BYTES = 20 * 1024 * 1024;
+
+/** Ask before throwing away unsaved work. */
+function mayDiscard(): boolean {
+  return !editor.dirty || confirm('The project has unsaved changes. Discard them?');
+}
+
+/** Load project text; on refusal say why (first few problems) and keep the open project. */
+export function loadProjectText(text: string, fileName: string | null): boolean {
+  const parsed = parseProjectFile(text);
+  if (!parsed.ok) {
+    const first = parsed.errors
+      .slice(0, 3)
+      .map((e: { path: string; message: string }) =>
+        e.path ? `${e.path}: ${e.message}` : e.message,
+      )
+      .join('; ');
+    const more = parsed.errors.length > 3 ? ` (and ${parsed.errors.length - 3} more)` : '';
+    editor.say(`${fileName ?? 'The file'} was not opened: ${first}${more}`, 'error');
+    return false;
+  }
+  editor.load(parsed.document as HeadrouteDocument, fileName);
+  editor.say(
+    parsed.migratedFrom !== undefined
+      ? `Opened ${fileName ?? parsed.document.name} (updated from file version ${parsed.migratedFrom}).`
+      : `Opened ${fileName ?? parsed.document.name}.`,
+  );
+  return true;
+}
+
+/** Start an empty project. */
+export function newProject(): void {
+  if (!mayDiscard()) return;
+  editor.load(createDocument('Untitled project'));
+  editor.say('New project.');
+}
+
+/** Open a project file chosen by the user or dropped on the page. */
+export async function openFile(file: File): Promise<boolean> {
+  if (file.size > MAX_FILE_BYTES) {
+    editor.say(`${file.name} was not opened: it is larger than 20 MB.`, 'error');
+    return false;
+  }
+  if (!mayDiscard()) return false;
+  return loadProjectText(await file.text(), file.name);
+}
+
+/** Open one of the demo projects in static/examples. */
+export async function openDemo(file: string, ask = true): Promise<boolean> {
+  if (ask && !mayDiscard()) return false;
+  try {
+    const response = await fetch(`${base}/examples/${file}`);
+    if (!response.ok) throw new Error(`HTTP ${response.status}`);
+    return loadProjectText(await response.text(), null);
+  } catch (error) {
+    editor.say(`The demo project ${file} could not be loaded (${String(error)}).`, 'error');
+    return false;
+  }
+}
+
+/** Save the project as a download. */
+export function saveProject(): void {
+  const name = editor.fileName ?? projectFileName(editor.doc);
+  const blob = new Blob([serializeProject(editor.doc)], { type: 'application/json' });
+  const url = URL.createObjectURL(blob);
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = name;
+  a.click();
+  setTimeout(() => URL.revokeObjectURL(url), 1000);
+  editor.markSaved(name);
+  editor.say(`Saved ${name}.`);
+}
