@@ -4,9 +4,9 @@
  * carries more pipes than it may, stored routes and case overrides name existing nodes.
  */
 import { idInUse } from './ids';
-import { nodeLabel } from './labels';
+import { NODE_KIND_LABEL, nodeLabel } from './labels';
 import { hasPort, isMultiPort } from './ports';
-import type { HeadrouteDocument, Id, PortRef } from './types';
+import type { HeadrouteDocument, Id, PortRef, SheetNode } from './types';
 
 /** One problem found in a document, tied to where it is and which element it belongs to. */
 export interface DocumentProblem {
@@ -24,14 +24,33 @@ export function pathKey(key: string | number): string {
   return /^[A-Za-z_][A-Za-z0-9_]*$/.test(key) ? `.${key}` : `[${JSON.stringify(key)}]`;
 }
 
-function pipeWords(id: Id, name: string): string {
-  return name.trim() !== '' && name !== id ? `Pipe "${name}" (${id})` : `Pipe ${id}`;
+/** `path` extended by `key` (`nodes` + `P1` → `nodes.P1`; a leading segment has no dot). */
+export function joinPath(path: string, key: string | number): string {
+  const part = pathKey(key);
+  return path === '' && part.startsWith('.') ? part.slice(1) : `${path}${part}`;
 }
 
 function nodeWords(doc: HeadrouteDocument, id: Id): string {
   const node = doc.nodes[id];
   const label = nodeLabel(node);
-  return label === id ? `${node.kind} ${id}` : `"${label}" (${id})`;
+  return label === id ? `${NODE_KIND_LABEL[node.kind]} ${id}` : `"${label}" (${id})`;
+}
+
+const COLLECTION_WORD = { nodes: 'Node', pipes: 'Pipe', cases: 'Case', routes: 'Route' } as const;
+
+/** A record of the document in words, e.g. `Pump "Transfer pump" (P1)` or `Pipe L2`. */
+export function recordWords(
+  doc: HeadrouteDocument,
+  collection: keyof typeof COLLECTION_WORD,
+  key: Id,
+): string {
+  const record = doc[collection][key];
+  const word =
+    collection === 'nodes'
+      ? NODE_KIND_LABEL[(record as SheetNode).kind]
+      : COLLECTION_WORD[collection];
+  const name = record.name.trim();
+  return name !== '' && name !== key ? `${word} "${name}" (${key})` : `${word} ${key}`;
 }
 
 /** Every link problem in a schema-valid document (empty when the document is sound). */
@@ -45,7 +64,7 @@ export function checkIntegrity(doc: HeadrouteDocument): DocumentProblem[] {
       if (record.id !== key) {
         problems.push({
           path: `${path}.id`,
-          element: `${collection.slice(0, -1)} ${key}`,
+          element: recordWords(doc, collection, key),
           message: `The record is stored under "${key}" but its id is "${record.id}"; they must be the same.`,
         });
       }
@@ -53,7 +72,7 @@ export function checkIntegrity(doc: HeadrouteDocument): DocumentProblem[] {
       if (earlier) {
         problems.push({
           path,
-          element: key,
+          element: recordWords(doc, collection, key),
           message: `The id "${key}" is used twice (in ${earlier} and in ${collection}); ids must be unique.`,
         });
       } else seen.set(key, collection);
@@ -77,7 +96,7 @@ export function checkIntegrity(doc: HeadrouteDocument): DocumentProblem[] {
 
   const portUse = new Map<string, Id>();
   for (const [key, pipe] of Object.entries(doc.pipes)) {
-    const element = pipeWords(key, pipe.name);
+    const element = recordWords(doc, 'pipes', key);
     const ends: Array<['from' | 'to', PortRef]> = [
       ['from', pipe.from],
       ['to', pipe.to],
@@ -127,7 +146,7 @@ export function checkIntegrity(doc: HeadrouteDocument): DocumentProblem[] {
       if (!Object.hasOwn(doc.nodes, id)) {
         problems.push({
           path: `routes${pathKey(key)}.nodes[${i}]`,
-          element: `Route "${route.name}" (${key})`,
+          element: recordWords(doc, 'routes', key),
           message: `The route passes node "${id}", which is not in the project.`,
         });
       }
@@ -148,7 +167,7 @@ export function checkIntegrity(doc: HeadrouteDocument): DocumentProblem[] {
         if (!node || node.kind !== kind) {
           problems.push({
             path: `cases${pathKey(key)}.overrides.${field}${pathKey(id)}`,
-            element: `Case "${c.name}" (${key})`,
+            element: recordWords(doc, 'cases', key),
             message: `The case changes ${kind} "${id}", but there is no ${kind} with that id.`,
           });
         }

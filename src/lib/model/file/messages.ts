@@ -3,7 +3,7 @@
  */
 import type * as v from 'valibot';
 import { NODE_KIND_LABEL } from '../labels';
-import { pathKey, type DocumentProblem } from '../integrity';
+import { joinPath, type DocumentProblem } from '../integrity';
 import type { NodeKind } from '../types';
 
 type Issue = v.BaseIssue<unknown>;
@@ -40,12 +40,7 @@ function lengthOf(input: unknown): number {
 /** The path of an issue as a string such as `nodes.P1.headCurve[0].flow`. */
 export function issuePath(issue: Issue): string {
   const keys = (issue.path ?? []).map((item) => item.key as string | number);
-  return keys
-    .map((key, i) => {
-      const part = pathKey(key);
-      return i === 0 && part.startsWith('.') ? part.slice(1) : part;
-    })
-    .join('');
+  return keys.reduce<string>((path, key) => joinPath(path, key), '');
 }
 
 function fieldName(issue: Issue): string {
@@ -86,7 +81,7 @@ export function describeIssue(issue: Issue): string {
       return `${field} has too many records, at most ${String(req)} allowed.`;
     case 'regex':
       return keyIssue
-        ? `The record key ${got} is not a valid id (1–64 letters, digits, "_", "-" or ".", starting with a letter or digit).`
+        ? `The record key "${String(issue.input).slice(0, MAX_QUOTE)}" is not a valid id (1–64 letters, digits, "_", "-" or ".", starting with a letter or digit).`
         : `${field} is not a valid id: ${got} (ids are 1–64 letters, digits, "_", "-" or ".", starting with a letter or digit).`;
     case 'picklist':
     case 'literal':
@@ -96,6 +91,8 @@ export function describeIssue(issue: Issue): string {
         ' .',
         '.',
       );
+    case 'custom':
+      return `${field} should be an object of records keyed by id, but is ${got}.`;
     default: {
       if (issue.input === undefined) return `${field} is missing.`;
       const expected = EXPECTED_WORDS[issue.type] ?? issue.expected ?? issue.type;

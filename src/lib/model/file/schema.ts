@@ -41,6 +41,18 @@ const shortText = v.pipe(v.string(), v.minLength(1), v.maxLength(MAX_SHORT_TEXT)
 /** An element id. */
 export const IdSchema = v.pipe(v.string(), v.regex(ID_PATTERN));
 
+const isPlainObject = (value: unknown): value is Record<string, unknown> =>
+  typeof value === 'object' && value !== null && !Array.isArray(value);
+
+/** Records keyed by id (an object, never a list), with at most `max` entries. */
+function recordOf<TValue extends v.GenericSchema>(value: TValue, max: number) {
+  return v.pipe(
+    v.custom<Record<string, unknown>>(isPlainObject),
+    v.record(IdSchema, value),
+    v.maxEntries(max),
+  );
+}
+
 const portRef = v.object({ node: IdSchema, port: IdSchema });
 
 const nodeBase = { id: IdSchema, name, x: coordinate, y: coordinate, z: elevation };
@@ -241,10 +253,10 @@ export const DocumentSchema = v.object({
   version: v.number(),
   name,
   settings: SettingsSchema,
-  nodes: v.pipe(v.record(IdSchema, NodeSchema), v.maxEntries(MAX_ELEMENTS)),
-  pipes: v.pipe(v.record(IdSchema, PipeSchema), v.maxEntries(MAX_ELEMENTS)),
-  cases: v.pipe(v.record(IdSchema, CaseSchema), v.maxEntries(MAX_CASES)),
-  routes: v.pipe(v.record(IdSchema, RouteSchema), v.maxEntries(MAX_ROUTES)),
+  nodes: recordOf(NodeSchema, MAX_ELEMENTS),
+  pipes: recordOf(PipeSchema, MAX_ELEMENTS),
+  cases: recordOf(CaseSchema, MAX_CASES),
+  routes: recordOf(RouteSchema, MAX_ROUTES),
 });
 
 // Compile-time check that the schema's output is the contract's document type (both ways).
