@@ -58,6 +58,20 @@ describe('colebrookWhite', () => {
     expect(worst).toBeLessThan(1e-9);
   });
 
+  // Reference values computed outside the project: Colebrook–White solved by bisection in
+  // Python 3's decimal module at 50 significant digits (200 halvings of [1e-12, 100] on
+  // x = 1/√f), rounded here to 14 significant digits.
+  it.each([
+    [1e3, 0, 0.062589114951891],
+    [4e3, 0.05, 0.076986834889225],
+    [1e5, 1e-4, 0.018513866077472],
+    [1e6, 1e-3, 0.019943465840477],
+    [1e8, 0, 0.0059404663516368],
+    [3.3e4, 2e-5, 0.023022901231143],
+  ])('Re = %f, ε/D = %f gives f = %f to 1e-12 (50-digit decimal bisection)', (re, rr, f) => {
+    expect(relativeError(colebrookWhite(re, rr), f)).toBeLessThan(1e-12);
+  });
+
   it('satisfies its own equation to 1e-12 (residual check, Colebrook 1939)', () => {
     for (const rr of roughnesses) {
       for (const re of [4e3, 1e5, 1e8]) {

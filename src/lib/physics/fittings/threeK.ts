@@ -40,7 +40,12 @@ export const DARBY_3K: Partial<Record<FittingType, DarbyCoefficients>> = {
     kd: 4.2,
     row: 'Elbow 90°, long radius, r/D = 1.5 (the table lists it under threaded)',
   },
-  'elbow-45-standard': { k1: 500, ki: 0.071, kd: 4.2, row: 'Elbow 45°, standard, r/D = 1' },
+  'elbow-45-standard': {
+    k1: 500,
+    ki: 0.071,
+    kd: 4.2,
+    row: 'Elbow 45°, threaded standard, r/D = 1',
+  },
   'elbow-45-long-radius': { k1: 500, ki: 0.052, kd: 4.0, row: 'Elbow 45°, long radius, r/D = 1.5' },
   'tee-run': { k1: 150, ki: 0.05, kd: 4.0, row: 'Tee, run through, flanged, r/D = 1' },
   'tee-branch': {
