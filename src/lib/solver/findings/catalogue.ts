@@ -215,4 +215,37 @@ export const findings = {
       `Pump ${q(name)} has no NPSHr curve; its NPSH margin cannot be checked.`,
       [id],
     ),
+  /** A span of a route where p_abs < p_v, located by chainage (the finding's chainage is its start). */
+  routeBelowVapourPressure: (
+    route: string,
+    start: number,
+    end: number,
+    lowestAt: string,
+    lowestMargin: number,
+    lowestChainage: number,
+    pv: number,
+    elements: Id[],
+  ) =>
+    finding(
+      'below-vapour-pressure',
+      `Route ${q(route)}, chainage ${fixed(start, 1)}–${fixed(end, 1)} m: absolute pressure is below the vapour pressure ${fixed(pv / 1000, 1)} kPa, lowest ${fixed(-lowestMargin / 1000, 1)} kPa under it at chainage ${fixed(lowestChainage, 1)} m (${q(lowestAt)}). The liquid would flash or the column would separate here; the single-liquid-phase results beyond this point are not physical and only indicative.`,
+      elements,
+      start,
+    ),
+  /** A span of a route under vacuum (HGL below the pipe), located by chainage. */
+  routeVacuum: (
+    route: string,
+    start: number,
+    end: number,
+    lowestAt: string,
+    lowestGauge: number,
+    lowestChainage: number,
+    elements: Id[],
+  ) =>
+    finding(
+      'vacuum',
+      `Route ${q(route)}, chainage ${fixed(start, 1)}–${fixed(end, 1)} m runs under vacuum (the HGL is below the pipe), down to ${fixed(lowestGauge / 1000, 1)} kPa(g) at chainage ${fixed(lowestChainage, 1)} m (${q(lowestAt)}): air can leak in at joints and vents.`,
+      elements,
+      start,
+    ),
 };
