@@ -24,6 +24,8 @@ export interface ProfileSvgOptions extends ExportMetaOptions {
 const FONT = "'IBM Plex Sans', 'Helvetica Neue', Arial, sans-serif";
 const TITLE_HEIGHT = 92;
 const LEGEND_HEIGHT = 44;
+/** A white outline behind text drawn over lines, so it stays legible. */
+const HALO = 'stroke="#ffffff" stroke-width="3" stroke-linejoin="round" paint-order="stroke"';
 
 /** Escapes text for use in XML content and attribute values. */
 export function escapeXml(text: string): string {
@@ -162,14 +164,14 @@ function chart(g: ProfileGeometry): string {
     const x1 = clamp(s.x1, plot.left, right);
     out.push(
       `<line x1="${f(x0)}" x2="${f(Math.max(x1, x0 + 1))}" y1="${f(bottom - 2)}" y2="${f(bottom - 2)}" stroke="${ink}" stroke-width="4"${dash}/>`,
-      `<text data-span-label="${s.kind}" x="${f(s.labelX)}" y="${f(s.labelY)}" text-anchor="middle" fill="${ink}" font-weight="${s.level === 'stop' ? 600 : 500}">${escapeXml(s.text)}</text>`,
+      `<text data-span-label="${s.kind}" ${HALO} x="${f(s.labelX)}" y="${f(s.labelY)}" text-anchor="middle" fill="${ink}" font-weight="${s.level === 'stop' ? 600 : 500}">${escapeXml(s.text)}</text>`,
     );
   }
 
   for (const n of g.npsh) {
     const ink = n.short ? PROFILE_INK.stop.ink : PROFILE_INK.text;
     out.push(
-      `<g data-part="npsh" fill="${ink}">`,
+      `<g data-part="npsh" fill="${ink}" ${HALO}>`,
       `<line x1="${f(n.anchorX)}" y1="${f(n.anchorY)}" x2="${f(n.x + 2)}" y2="${f(n.y - 9)}" stroke="${PROFILE_INK.muted}" stroke-width="0.8"/>`,
       `<text x="${f(n.x)}" y="${f(n.y)}">${escapeXml(n.lines[0])}</text>`,
       `<text x="${f(n.x)}" y="${f(n.y + 13)}">${escapeXml(n.lines[1])}</text>`,
