@@ -9,7 +9,8 @@
  * - no points:                'empty'; every evaluation returns NaN, so callers check
  *                             `fit.form === 'empty'` first.
  * The polynomial is used as it stands outside the points' flow range; `flowRange` lets the
- * caller flag operation off the curve.
+ * caller flag operation off the curve. A constant (one-point) head curve has zero slope, so
+ * the flow it delivers is set by the system alone; `pumpCurveWarnings` reports it.
  *
  * Affinity laws for a speed ratio s = N/N_rated (Karassik et al., Pump Handbook, 4th ed.,
  * 2008, ch. 2 — from memory; the standard textbook form): Q ∝ N, H ∝ N², P ∝ N³, and the
