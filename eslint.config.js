@@ -39,6 +39,7 @@ export default ts.config(
       'src/lib/model/**',
       'src/lib/solver/**',
       'src/lib/chart/**',
+      'src/lib/report/**',
     ],
     rules: {
       'no-restricted-imports': [
