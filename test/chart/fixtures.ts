@@ -38,26 +38,25 @@ export function station(
 }
 
 /**
- * Feed tank → pump → rack high point (waypoint) → day tank. The HGL dips under the vapour line
- * over the high point, between stations.
+ * Feed tank → pump → rack high point (waypoint) → day tank, laid out the way
+ * src/lib/solver/profile.ts lays out stations: a vessel gives its liquid level only, a pump a
+ * station on each side, a waypoint none (the pipe ends on either side sit at it). The HGL dips
+ * under the vapour line over the high point, between stations.
  */
 export function demoProfile(): Profile {
   return {
-    route: ['T1', 'P1', 'PU', 'P2', 'W1', 'P3', 'T2'],
+    route: ['T1', 'PU', 'W1', 'T2'],
     stations: [
       station(0, 5, 5, 'T1', 'level', 0),
-      station(0, 1, 4.8, 'T1', 'node-out'),
       station(0, 1, 4.8, 'P1', 'pipe'),
       station(20, 0.5, 4.5, 'P1', 'pipe'),
       station(20, 0.5, 4.5, 'PU', 'node-in'),
       station(20, 0.5, 34.5, 'PU', 'node-out'),
       station(20, 0.5, 34.5, 'P2', 'pipe'),
+      station(70, 15.25, 27.25, 'P2', 'pipe'),
       station(120, 30, 20, 'P2', 'pipe'),
-      station(120, 30, 20, 'W1', 'node-in'),
-      station(120, 30, 20, 'W1', 'node-out'),
       station(120, 30, 20, 'P3', 'pipe'),
       station(220, 8, 9, 'P3', 'pipe'),
-      station(220, 8, 9, 'T2', 'node-in'),
       station(220, 9, 9, 'T2', 'level', 0),
     ],
   };

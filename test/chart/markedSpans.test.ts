@@ -27,7 +27,7 @@ describe('markedSpans', () => {
     expect(span.minChainage).toBe(120);
     expect(span.minMargin).toBeCloseTo(20 - (30 + VAPOUR_OFFSET), 9);
     expect(span.minMarginPa).toBeCloseTo(RHO_G * (20 - 30) + P_ATM - P_VAPOUR, 6);
-    expect(span.elements).toEqual(['P2', 'W1', 'P3']);
+    expect(span.elements).toEqual(['P2', 'P3']);
   });
 
   it('finds the caution span where the HGL is under the pipe (vacuum)', () => {

@@ -92,7 +92,7 @@ describe('profileGeometry', () => {
   it('holds the elevation scale still when given the range it showed', () => {
     const first = profileGeometry(demoProfile(), SIZE, { system: 'SI' });
     const raised = demoProfile();
-    for (const s of raised.stations) if (s.elementId === 'W1') s.elevation = 60;
+    for (const s of raised.stations) if (s.chainage === 120) s.elevation = 60;
     const held = profileGeometry(raised, SIZE, {
       system: 'SI',
       elevationWindow: first.elevationRange,
@@ -118,9 +118,14 @@ describe('profileGeometry', () => {
       'Rack high point',
       'Day tank',
     ]);
-    const nodes = g.nodes.find((n) => n.elementId === 'W1')!;
-    expect(nodes.kind).toBe('waypoint');
-    expect(nodes.y).toBeCloseTo(g.y(30), 9);
+    // The waypoint has no station of its own: it sits where its two pipes meet.
+    const waypoint = g.nodes.find((n) => n.elementId === 'W1')!;
+    expect(waypoint.kind).toBe('waypoint');
+    expect(waypoint.chainage).toBe(120);
+    expect(waypoint.y).toBeCloseTo(g.y(30), 9);
+    // A vessel sits at its nozzle: the pipe end, not its liquid surface.
+    const feed = g.nodes.find((n) => n.elementId === 'T1')!;
+    expect(feed.y).toBeCloseTo(g.y(1), 9);
     expect(g.npsh).toHaveLength(1);
     expect(g.npsh[0].lines[0]).toMatch(/^NPSHa 11\.8/);
     expect(g.npsh[0].lines[1]).toMatch(/^NPSHr 3\.2/);

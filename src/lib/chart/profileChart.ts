@@ -158,7 +158,7 @@ const LINE_GAP = 1.25;
  * NPSH notes at pump suctions and axis ticks.
  */
 export function profileGeometry(
-  profile: { stations: readonly Station[] },
+  profile: { route?: readonly Id[]; stations: readonly Station[] },
   size: ChartSize,
   options: ProfileChartOptions,
 ): ProfileGeometry {
@@ -218,7 +218,7 @@ export function profileGeometry(
   }));
 
   const kindOf = (id: Id): NodeKind | null => options.nodes?.[id]?.kind ?? null;
-  const nodes = nodeMarks(pipeLine, kindOf, x, y);
+  const nodes = nodeMarks(profile.route ?? [], pipeLine, kindOf, x, y);
   const steps = nodeSteps(pipeLine, x, y);
   const levels = levelMarks(stations, options.nodes, x, y, plot);
 
@@ -289,23 +289,37 @@ function groupRuns(stations: readonly Station[]): Station[][] {
   return runs;
 }
 
+/**
+ * Where each node of the route sits. Pipe runs k and k + 1 meet at route node k + 1, so nodes
+ * without stations of their own (waypoints, junctions; vessels, which only have a level
+ * station) are found at the pipe ends. Without a matching route, nodes with stations are used.
+ */
 function nodeMarks(
+  route: readonly Id[],
   line: readonly Station[],
   kindOf: (id: Id) => NodeKind | null,
   x: (c: number) => number,
   y: (h: number) => number,
 ): NodeMark[] {
+  const mark = (elementId: Id, s: Station): NodeMark => ({
+    elementId,
+    kind: kindOf(elementId),
+    chainage: s.chainage,
+    x: x(s.chainage),
+    y: y(s.elevation),
+  });
+  const runs = groupRuns(line.filter((s) => s.at === 'pipe'));
+  if (route.length >= 2 && runs.length === route.length - 1) {
+    return route.map((id, k) => {
+      const own = line.find((s) => s.elementId === id && s.at !== 'pipe');
+      if (own) return mark(id, own);
+      return mark(id, k < runs.length ? runs[k][0] : runs[k - 1][runs[k - 1].length - 1]);
+    });
+  }
   const marks: NodeMark[] = [];
   for (const s of line) {
-    if (s.at === 'pipe') continue;
-    if (marks.some((m) => m.elementId === s.elementId)) continue;
-    marks.push({
-      elementId: s.elementId,
-      kind: kindOf(s.elementId),
-      chainage: s.chainage,
-      x: x(s.chainage),
-      y: y(s.elevation),
-    });
+    if (s.at === 'pipe' || marks.some((m) => m.elementId === s.elementId)) continue;
+    marks.push(mark(s.elementId, s));
   }
   return marks;
 }

@@ -5,7 +5,7 @@
  */
 import type { HeadrouteDocument, Id, NodeKind } from '../../model/types';
 import type { SolveResult } from '../../solver/types';
-import { defaultRoute, findRoute } from '../../solver/route';
+import { defaultRoute, searchRoute } from '../../solver/route';
 
 /** The user's choice of route. */
 export type RouteChoice =
@@ -81,8 +81,12 @@ export function resolveRoute(
     } else if (from === to) {
       problem = 'Start and end are the same node: pick two different ones.';
     } else {
-      const nodes = findRoute(doc, result, from, to);
-      if (nodes) return { nodes, name: endsName(doc, nodes), storedId: null, problem: null };
+      // searchRoute is findRoute with a note when the route has to run against the flow.
+      const found = searchRoute(doc, result, from, to);
+      if (found) {
+        const nodes = found.route;
+        return { nodes, name: endsName(doc, nodes), storedId: null, problem: found.note };
+      }
       problem = `No route along the pipes from ${nameOf(doc, from)} to ${nameOf(doc, to)}.`;
     }
   }
