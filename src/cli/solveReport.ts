@@ -1,0 +1,200 @@
+/**
+ * The figures `headroute solve` prints, gathered once from the document and the result and
+ * then written as text, CSV or JSON. All values SI (m, s, Pa absolute unless "Gauge", W).
+ */
+import { SCREENING_CAUTION } from '../lib/chart/exportMeta';
+import { nodeLabel } from '../lib/model/labels';
+import type { FittingType, HeadrouteDocument, Id } from '../lib/model/types';
+import { profile } from '../lib/solver/profile';
+import { defaultRoute } from '../lib/solver/route';
+import { lowestVapourMargin, routeFindings, routeName } from '../lib/solver/routeFindings';
+import type {
+  ControlValveResult,
+  Finding,
+  FluidState,
+  PipeResult,
+  PumpResult,
+  SolveResult,
+} from '../lib/solver/types';
+
+/** One pipe's row. */
+export interface PipeRow extends PipeResult {
+  id: Id;
+  name: string;
+  from: string;
+  to: string;
+  length: number;
+}
+
+/** One pump's row. */
+export interface PumpRow extends PumpResult {
+  id: Id;
+  name: string;
+  running: boolean;
+}
+
+/** One control valve's row. */
+export interface ControlValveRow extends ControlValveResult {
+  id: Id;
+  name: string;
+}
+
+/** One fitting's row (manual valves, check valves, elbows, reducers, orifices…). */
+export interface FittingRow {
+  id: Id;
+  name: string;
+  fittingType: FittingType;
+  closed: boolean;
+  flow: number;
+  /** EGL drop across it, m. */
+  headLoss: number;
+  lossCoefficient: number | null;
+}
+
+/** The lowest margin to vapour pressure along the default route. */
+export interface RouteSummary {
+  name: string;
+  nodes: Id[];
+  /** Developed length, m. */
+  length: number;
+  /** p_abs − p_v at the lowest point, Pa; null when the route has no solved station. */
+  lowestVapourMargin: number | null;
+  lowestPressureAbs: number | null;
+  lowestChainage: number | null;
+  lowestElement: Id | null;
+  lowestElementName: string | null;
+}
+
+/** Everything `headroute solve` reports. */
+export interface SolveReport {
+  caution: string;
+  project: string;
+  file: string;
+  case: { id: Id | null; name: string };
+  unitSystem: 'SI' | 'US';
+  units: 'SI';
+  fluid: FluidState;
+  converged: boolean;
+  iterations: number;
+  residual: number;
+  massImbalance: number;
+  pipes: PipeRow[];
+  pumps: PumpRow[];
+  controlValves: ControlValveRow[];
+  fittings: FittingRow[];
+  route: RouteSummary | null;
+  /** The solver's findings, then those along the default route (located by chainage). */
+  findings: Finding[];
+  counts: { stop: number; caution: number; note: number };
+}
+
+function label(doc: HeadrouteDocument, id: Id): string {
+  return Object.hasOwn(doc.nodes, id) ? nodeLabel(doc.nodes[id]) : id;
+}
+
+function byName<T extends { name: string; id: Id }>(rows: T[]): T[] {
+  return rows.sort(
+    (a, b) =>
+      a.name.localeCompare(b.name, undefined, { numeric: true }) || a.id.localeCompare(b.id),
+  );
+}
+
+/** The route summary of the default route, and its findings; null when there is no route. */
+function routeSummary(
+  doc: HeadrouteDocument,
+  result: SolveResult,
+): { summary: RouteSummary; findings: Finding[] } | null {
+  const nodes = defaultRoute(doc, result);
+  if (!nodes) return null;
+  const prof = profile(doc, result, nodes);
+  const lowest = lowestVapourMargin(prof);
+  const last = prof.stations[prof.stations.length - 1];
+  return {
+    summary: {
+      name: routeName(doc, prof),
+      nodes: prof.route,
+      length: last?.chainage ?? 0,
+      lowestVapourMargin: lowest?.vapourMargin ?? null,
+      lowestPressureAbs: lowest?.pressureAbs ?? null,
+      lowestChainage: lowest?.chainage ?? null,
+      lowestElement: lowest?.elementId ?? null,
+      lowestElementName: lowest
+        ? (doc.nodes[lowest.elementId]?.name ?? doc.pipes[lowest.elementId]?.name ?? null)
+        : null,
+    },
+    findings: routeFindings(doc, result, prof),
+  };
+}
+
+/** Gathers the report of one solve. */
+export function solveReport(
+  doc: HeadrouteDocument,
+  result: SolveResult,
+  file: string,
+): SolveReport {
+  const pipes: PipeRow[] = [];
+  for (const [id, r] of Object.entries(result.pipes)) {
+    const pipe = doc.pipes[id];
+    pipes.push({
+      id,
+      name: pipe.name || id,
+      from: label(doc, pipe.from.node),
+      to: label(doc, pipe.to.node),
+      length: pipe.length,
+      ...r,
+    });
+  }
+  const pumps: PumpRow[] = Object.entries(result.pumps).map(([id, r]) => {
+    const node = doc.nodes[id];
+    const running = node.kind === 'pump' ? node.running : false;
+    return { id, name: label(doc, id), running, ...r };
+  });
+  const controlValves: ControlValveRow[] = Object.entries(result.controlValves).map(([id, r]) => ({
+    id,
+    name: label(doc, id),
+    ...r,
+  }));
+  const fittings: FittingRow[] = [];
+  for (const node of Object.values(doc.nodes)) {
+    const r = result.nodes[node.id];
+    if (node.kind !== 'fitting' || !r) continue;
+    fittings.push({
+      id: node.id,
+      name: label(doc, node.id),
+      fittingType: node.fittingType,
+      closed: node.closed,
+      flow: r.flow ?? 0,
+      headLoss: r.headLoss ?? 0,
+      lossCoefficient: r.lossCoefficient ?? null,
+    });
+  }
+  const route = routeSummary(doc, result);
+  const findings = [...result.findings, ...(route?.findings ?? [])];
+  const counts = { stop: 0, caution: 0, note: 0 };
+  for (const f of findings) counts[f.level]++;
+  const caseId = result.caseId;
+  return {
+    caution: SCREENING_CAUTION,
+    project: doc.name,
+    file,
+    case: {
+      id: caseId,
+      name:
+        caseId !== null && Object.hasOwn(doc.cases, caseId) ? doc.cases[caseId].name : 'Base case',
+    },
+    unitSystem: doc.settings.unitSystem,
+    units: 'SI',
+    fluid: result.fluid,
+    converged: result.converged,
+    iterations: result.iterations,
+    residual: result.residual,
+    massImbalance: result.massImbalance,
+    pipes: byName(pipes),
+    pumps: byName(pumps),
+    controlValves: byName(controlValves),
+    fittings: byName(fittings),
+    route: route?.summary ?? null,
+    findings,
+    counts,
+  };
+}
