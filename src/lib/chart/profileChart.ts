@@ -483,7 +483,9 @@ function npshNotes(
   const lineHeight = ctx.fontSize * LINE_GAP;
   return notes.map((n, i) => {
     const anchorY = ctx.y(Number.isFinite(n.s.hgl) ? n.s.hgl : n.s.elevation);
-    const top = Math.max(ctx.plot.top + lineHeight, anchorY + 14 + lanes[i].lane * 2 * lineHeight);
+    // Below both the HGL and the pipe at the suction, where the chart is usually clear.
+    const below = Math.max(anchorY, ctx.y(n.s.elevation));
+    const top = Math.max(ctx.plot.top + lineHeight, below + 16 + lanes[i].lane * 2 * lineHeight);
     return {
       elementId: n.s.elementId,
       anchorX: ctx.x(n.s.chainage),
