@@ -6,6 +6,7 @@ import { SCREENING_CAUTION } from '../lib/chart/exportMeta';
 import { CliError, EXIT } from './args';
 import { processIo, type CliIo } from './io';
 import { profileCommand } from './profileCommand';
+import { REVIEW_HELP, reviewCommand } from './review';
 import { solveCommand } from './solveCommand';
 
 /** The text of `headroute --help`. */
@@ -31,6 +32,7 @@ Usage:
       --format F      csv (default, project units), json (SI) or svg (a drawing)
       --segments N    pieces each pipe is cut into (default 10)
 
+${REVIEW_HELP}
   headroute --help | --version
 
 Exit codes:
@@ -65,6 +67,7 @@ export async function main(argv: readonly string[], io: CliIo = processIo): Prom
     }
     if (command === 'solve') return await solveCommand(rest, io);
     if (command === 'profile') return await profileCommand(rest, io);
+    if (command === 'review') return await reviewCommand(rest, io);
     throw new CliError(`Unknown command “${command}”. See headroute --help.`, EXIT.usage);
   } catch (error) {
     if (error instanceof CliError) {
