@@ -86,8 +86,9 @@ function findingsList(
   if (list.length === 0) return `<p class="empty">No findings.</p>`;
   const sorted = [...list].sort((a, b) => LEVEL_ORDER[a.level] - LEVEL_ORDER[b.level]);
   const items = sorted.map((f) => {
+    // Route findings already say their chainage in the message.
     const where =
-      f.chainage === undefined
+      f.chainage === undefined || /chainage/i.test(f.message)
         ? ''
         : ` (chainage ${formatQuantity(f.chainage, 'length', system, { digits: 4 })})`;
     return `<li data-level="${f.level}" data-code="${escapeHtml(f.code)}"><span class="level level-${f.level}">${f.level.toUpperCase()}</span>${escapeHtml(f.message + where)}</li>`;
