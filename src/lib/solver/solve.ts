@@ -62,9 +62,10 @@ export function solve(doc: HeadrouteDocument, caseId?: Id | null): SolveResult {
     const parts = activeParts(working, graph);
     const outcome = gradientSolve(graph, parts.activeNode, parts.activeLink);
     const results = elementResults(working, graph, outcome, parts.activeLink, fluid);
+    const nothingFixed = parts.findings.some((f) => f.code === 'no-fixed-head');
     const result: SolveResult = {
       ...base,
-      converged: outcome.converged,
+      converged: outcome.converged && !nothingFixed,
       iterations: outcome.iterations,
       residual: outcome.residual,
       massImbalance: outcome.massImbalance,

@@ -18,6 +18,14 @@ import type { HydraulicGraph } from './build';
 export const MIN_SLOPE = 1e-4;
 /** Head-balance tolerance on every link, m. */
 export const HEAD_TOLERANCE = 1e-9;
+/**
+ * Slope above which a link is on a stiff branch (shut, or a non-return holding reverse flow),
+ * s/m². There a head residual means nothing (R·δQ for rounding δQ), so such links are checked
+ * in flow instead: |ΔH − h(Q)|/slope ≤ STIFF_FLOW_TOLERANCE.
+ */
+export const STIFF_SLOPE = 1e8;
+/** Flow tolerance on stiff links, m³/s. */
+export const STIFF_FLOW_TOLERANCE = 1e-9;
 /** Iteration limit. */
 export const MAX_ITERATIONS = 200;
 
@@ -28,7 +36,7 @@ export interface GgaOutcome {
   /** Flow in every link, m³/s (0 for inactive links). */
   flows: Float64Array;
   iterations: number;
-  /** Largest |H_from − H_to − h(Q)| over the links, m. */
+  /** Largest |H_from − H_to − h(Q)| over the links not on a stiff branch, m. */
   residual: number;
   /** Largest continuity error at a free node, m³/s. */
   massImbalance: number;
@@ -85,17 +93,31 @@ export function gradientSolve(
   for (let iteration = 1; iteration <= MAX_ITERATIONS + 1; iteration++) {
     // Laws at the current flows; the head residual of the previous solve comes for free.
     residual = 0;
+    let stiffSettled = true;
     for (let k = 0; k < nLinks; k++) {
       const law = graph.links[k].law;
       if (!activeLink[k] || law === null) continue;
+      const link = graph.links[k];
+      const drop = heads[link.from] - heads[link.to];
       law.refresh(flows[k]);
       loss[k] = law.headLoss(flows[k]);
+      const linkResidual = Math.abs(drop - loss[k]);
+      const stiff = law.slope(flows[k]);
+      if (stiff >= STIFF_SLOPE) {
+        if (!(linkResidual / stiff <= STIFF_FLOW_TOLERANCE)) stiffSettled = false;
+      } else residual = Math.max(residual, linkResidual);
+      // A non-return link held shut whose heads now push forward (drop above its loss at zero
+      // flow, e.g. a pump's shut-off head) is linearised on its forward branch at Q = 0;
+      // linearised on the stiff reverse branch it could only creep open by |ΔH|/R per step.
+      if (law.nonReturn && flows[k] < 0 && iteration > 1 && drop > law.headLoss(0)) {
+        flows[k] = 0;
+        law.refresh(0);
+        loss[k] = law.headLoss(0);
+      }
       slope[k] = Math.max(law.slope(flows[k]), MIN_SLOPE);
-      const link = graph.links[k];
-      residual = Math.max(residual, Math.abs(heads[link.from] - heads[link.to] - loss[k]));
     }
     if (!Number.isFinite(residual)) break;
-    if (iteration > 1 && residual <= HEAD_TOLERANCE) {
+    if (iteration > 1 && residual <= HEAD_TOLERANCE && stiffSettled) {
       converged = true;
       break;
     }
@@ -137,15 +159,14 @@ export function gradientSolve(
     for (let k = 0; k < nLinks; k++) {
       const link = graph.links[k];
       if (!activeLink[k] || link.law === null) continue;
-      const w = 1 / slope[k];
-      flows[k] = flows[k] - loss[k] * w + (heads[link.from] - heads[link.to]) * w;
+      flows[k] += (heads[link.from] - heads[link.to] - loss[k]) / slope[k];
     }
   }
 
   const worst: Array<[number, number]> = [];
   for (let k = 0; k < nLinks; k++) {
     const link = graph.links[k];
-    if (!activeLink[k] || link.law === null) continue;
+    if (!activeLink[k] || link.law === null || link.law.slope(flows[k]) >= STIFF_SLOPE) continue;
     const r = Math.abs(heads[link.from] - heads[link.to] - link.law.headLoss(flows[k]));
     if (!(r <= HEAD_TOLERANCE)) worst.push([k, Number.isFinite(r) ? r : Infinity]);
   }

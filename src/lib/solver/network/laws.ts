@@ -36,6 +36,8 @@ export interface LinkLaw {
   slope(flow: number): number;
   /** A starting flow for the iteration, m³/s. */
   readonly initialFlow: number;
+  /** True for a non-return link (pump, check valve): reverse flow meets CLOSED_RESISTANCE. */
+  readonly nonReturn?: boolean;
 }
 
 /** Pipe cross-section area, m². */
@@ -158,7 +160,7 @@ export class LocalLossLaw implements LinkLaw {
    */
   constructor(
     private readonly coefficient: (flow: number) => { k: number; area: number },
-    private readonly nonReturn: boolean,
+    readonly nonReturn: boolean,
     initialFlow: number,
   ) {
     this.initialFlow = initialFlow;
@@ -220,6 +222,7 @@ export class QuadraticLaw implements LinkLaw {
  * so reverse flow is negligible and the law stays continuous and monotone.
  */
 export class PumpLaw implements LinkLaw {
+  readonly nonReturn = true;
   constructor(
     private readonly head: (flow: number) => number,
     private readonly headSlope: (flow: number) => number,
@@ -232,6 +235,9 @@ export class PumpLaw implements LinkLaw {
   }
   slope(flow: number): number {
     if (flow < 0) return CLOSED_RESISTANCE;
-    return -this.headSlope(flow);
+    // Where the curve rises with flow (dH/dQ > 0, near shut-off on some fits) the true slope
+    // of the law is negative; its magnitude is used instead, a chord step that keeps the matrix
+    // positive definite and does not amplify rounding at a dead end.
+    return Math.abs(this.headSlope(flow));
   }
 }
