@@ -1,0 +1,82 @@
+/**
+ * The demo projects shipped in static/examples. They are invented scenarios with realistic
+ * values, all SI in the files, and they load through `parseProjectFile` exactly like a user's
+ * file. Values were chosen by hand calculation (Darcy–Weisbach with Colebrook–White friction,
+ * fitting K values of the Crane kind, water properties from IAPWS-IF97) so each pump runs near its
+ * best-efficiency flow:
+ *
+ * - pump-over-rack: 30 m³/h at 42 m against 27.8 m static (level 10 m + 2 barg − tank level 3 m),
+ *   about 4.4 m friction in 98.5 m of 3" line, 0.2 m on the 4" suction and 9.6 m across FV-101
+ *   (Kv 100 equal-percentage at 70 % → Kv 31); BEP of P-101 is 30 m³/h. NPSHa about 10.7 m.
+ * - siphon-over-bund: 4 m level difference drives about 61 m³/h through 50 m of HDPE (90 mm
+ *   bore); the crest at +5 m sits about 6.2 m below atmospheric pressure (about 40 kPa abs),
+ *   well above the 2.3 kPa vapour pressure of water at 20 °C.
+ * - branched-with-recirculation: P-301 gives about 46 m³/h at 32 m (BEP 45 m³/h): about 20 m³/h
+ *   to each consumer and 6.3 m³/h back through RO-301 (12 mm bore in 1-1/2", permanent loss
+ *   K ≈ 320 by ISO 5167-2 eq. (5) with C = 0.61).
+ */
+import type { ParseResult } from './file/parse';
+import { parseProjectFile } from './file/parse';
+
+/** One demo project. */
+export interface ExampleProject {
+  /** File name under static/examples (served at /examples/<file>). */
+  file: string;
+  title: string;
+  summary: string;
+}
+
+/** The demo projects, the first one opened at a first visit. */
+export const EXAMPLES: readonly ExampleProject[] = [
+  {
+    file: 'pump-over-rack.headroute.json',
+    title: 'Pump over a pipe rack',
+    summary:
+      'Warm water (60 °C) pumped from a ground-level tank over a +12 m rack into a closed receiver at 2 barg, with strainer, gate and check valves and a control valve.',
+  },
+  {
+    file: 'siphon-over-bund.headroute.json',
+    title: 'Siphon over a bund wall',
+    summary:
+      'A gravity siphon in HDPE from a pond over a +5 m bund crest into a basin 4 m lower; the crest runs under vacuum.',
+  },
+  {
+    file: 'branched-with-recirculation.headroute.json',
+    title: 'Branched feed with minimum-flow return',
+    summary:
+      'One pump feeding an elevated head tank and a pressurised receiver through a header, with a minimum-flow line back to the source through a restriction orifice.',
+  },
+];
+
+/** Path of a demo project relative to the site root (prefix with the app's base path). */
+export function exampleUrl(example: ExampleProject, base = ''): string {
+  return `${base}/examples/${example.file}`;
+}
+
+/**
+ * Fetch a demo project and read it through the same validated path as a user's file. Network
+ * failures come back as messages, like any other unreadable file.
+ */
+export async function loadExample(
+  example: ExampleProject,
+  fetchText: (url: string) => Promise<string> = async (url) => {
+    const response = await fetch(url);
+    if (!response.ok) throw new Error(`HTTP ${response.status}`);
+    return response.text();
+  },
+  base = '',
+): Promise<ParseResult> {
+  let text: string;
+  try {
+    text = await fetchText(exampleUrl(example, base));
+  } catch (error) {
+    const why = error instanceof Error ? error.message : String(error);
+    return {
+      ok: false,
+      errors: [
+        { path: '$', message: `The demo project "${example.title}" could not be loaded (${why}).` },
+      ],
+    };
+  }
+  return parseProjectFile(text);
+}
