@@ -156,10 +156,13 @@ class Editor {
   }
 
   #requestSolve(): void {
-    this.#runner ??= createSolveRunner((tagged) => {
-      // Keep only the newest revision's result; a late reply for an older one is dropped.
-      if (!this.tagged || tagged.revision >= this.tagged.revision) this.tagged = tagged;
-    });
+    this.#runner ??= createSolveRunner(
+      (tagged) => {
+        // Keep only the newest revision's result; a late reply for an older one is dropped.
+        if (!this.tagged || tagged.revision >= this.tagged.revision) this.tagged = tagged;
+      },
+      (message) => this.say(`The solver stopped: ${message}. The sheet stays editable.`, 'error'),
+    );
     this.#runner.request(this.doc, this.revision, this.caseId);
   }
 

@@ -6,6 +6,7 @@
 import { base } from '$app/paths';
 import { createDocument } from '../model/defaults';
 import { parseProjectFile, projectFileName, serializeProject } from '../model/file';
+import { loadExample, type ExampleProject } from '../model/examples';
 import type { HeadrouteDocument } from '../model/types';
 import { editor } from './editor.svelte';
 
@@ -58,16 +59,16 @@ export async function openFile(file: File): Promise<boolean> {
 }
 
 /** Open one of the demo projects in static/examples. */
-export async function openDemo(file: string, ask = true): Promise<boolean> {
+export async function openDemo(example: ExampleProject, ask = true): Promise<boolean> {
   if (ask && !mayDiscard()) return false;
-  try {
-    const response = await fetch(`${base}/examples/${file}`);
-    if (!response.ok) throw new Error(`HTTP ${response.status}`);
-    return loadProjectText(await response.text(), null);
-  } catch (error) {
-    editor.say(`The demo project ${file} could not be loaded (${String(error)}).`, 'error');
+  const parsed = await loadExample(example, undefined, base);
+  if (!parsed.ok) {
+    editor.say(parsed.errors.map((e) => e.message).join('; '), 'error');
     return false;
   }
+  editor.load(parsed.document);
+  editor.say(`Opened the demo project “${example.title}”.`);
+  return true;
 }
 
 /** Save the project as a download. */
