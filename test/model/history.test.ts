@@ -110,6 +110,16 @@ describe('History', () => {
     expect(h.canRedo).toBe(false);
   });
 
+  it('deleting a node and its pipes is one step; one undo brings all back', () => {
+    const start = sampleDocument();
+    const h = new History(start);
+    h.apply(deleteElements(['P1']));
+    expect(Object.keys(h.doc.pipes)).toEqual([]);
+    expect(h.undoDepth).toBe(1);
+    h.undo();
+    expect(h.doc).toEqual(start);
+  });
+
   it('is bounded', () => {
     const h = new History(createDocument('x'), 5);
     for (let i = 0; i < 12; i++) h.apply(renameDocument(`n${i}`));

@@ -56,6 +56,10 @@ const EXPECTED: Record<string, { message: string; path: string; element?: string
     message: 'The id "V1" is used twice (in nodes and in pipes)',
     path: 'pipes.V1',
   },
+  'duplicate-key': {
+    message: 'The key "J1" is written twice in the same object',
+    path: 'nodes.J1',
+  },
   'draft-duplicate-ids': { message: 'Two nodes have the id "J1"', path: 'nodes[1].id' },
   'pipe-to-missing-node': {
     message: 'names node "X9", which is not in the project',

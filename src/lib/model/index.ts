@@ -26,3 +26,14 @@ export {
 export { checkIntegrity, type DocumentProblem } from './integrity';
 export { History, type HistoryStep } from './history';
 export * from './commands/index';
+export {
+  parseProjectFile,
+  serializeProject,
+  projectFileName,
+  validateDocument,
+  CURRENT_VERSION,
+  FORMAT_TAG,
+  MIGRATIONS,
+  type ParseResult,
+} from './file/index';
+export { EXAMPLES, exampleUrl, loadExample, type ExampleProject } from './examples';

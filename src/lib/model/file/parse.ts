@@ -7,6 +7,7 @@
 import type { DocumentProblem } from '../integrity';
 import { joinPath } from '../integrity';
 import type { HeadrouteDocument } from '../types';
+import { findDuplicateKey } from './duplicateKeys';
 import { MAX_DEPTH, MAX_FILE_CHARS } from './limits';
 import { migrate } from './migrations';
 import { validateDocument } from './validate';
@@ -77,6 +78,13 @@ export function parseProjectFile(text: string): ParseResult {
   } catch (error) {
     const detail = error instanceof Error ? error.message : String(error);
     return fail(`The file is not valid JSON; it may be cut short or damaged (${detail}).`);
+  }
+  const duplicate = findDuplicateKey(text);
+  if (duplicate) {
+    return fail(
+      `The key "${duplicate.key.slice(0, 40)}" is written twice in the same object; each id and field may appear only once.`,
+      duplicate.path,
+    );
   }
   const hostile = scanTree(raw);
   if (hostile) return { ok: false, errors: [hostile] };
