@@ -134,7 +134,8 @@ export function createNode(kind: NodeKind, at: { x: number; y: number }, id: Id)
     case 'junction':
       return { ...base, kind } satisfies Junction;
     case 'boundary':
-      return { ...base, kind, pressureAbs: STANDARD_ATMOSPHERE } satisfies Boundary;
+      // A header at about 2 barg (sea level): plausible as a supply or as a delivery point.
+      return { ...base, kind, pressureAbs: STANDARD_ATMOSPHERE + 2e5 } satisfies Boundary;
   }
 }
 
