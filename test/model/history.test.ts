@@ -146,8 +146,10 @@ describe('History', () => {
     expect(heard).toEqual([1, 2]);
   });
 
-  it('documents it hands out are frozen', () => {
-    const h = new History(sampleDocument());
+  it('documents it hands out are frozen, including ones given to reset', () => {
+    const h = new History(createDocument('x'));
+    h.reset(structuredClone(sampleDocument()));
+    expect(Object.isFrozen(h.doc.nodes.P1)).toBe(true);
     h.apply(moveNodes(['V1'], 1, 1));
     expect(Object.isFrozen(h.doc)).toBe(true);
     expect(Object.isFrozen(h.doc.nodes.V1)).toBe(true);

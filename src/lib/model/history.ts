@@ -4,7 +4,7 @@
  * rolls back. Loading a document (`reset`) is not undoable: it clears both stacks.
  * `revision` grows with every change of `doc`, so results computed from a document can carry it.
  */
-import { applyPatches, type Patch } from 'immer';
+import { applyPatches, freeze, type Patch } from 'immer';
 import { applyCommand, type Command, type CommandError } from './commands/command';
 import type { HeadrouteDocument, Id } from './types';
 
@@ -35,7 +35,7 @@ export class History {
   readonly limit: number;
 
   constructor(doc: HeadrouteDocument, limit = 200) {
-    this.#doc = doc;
+    this.#doc = freeze(doc, true);
     this.limit = Math.max(1, limit);
   }
 
@@ -177,6 +177,6 @@ export class History {
     this.#gesture = null;
     this.#undo = [];
     this.#redo = [];
-    this.#set(doc);
+    this.#set(freeze(doc, true));
   }
 }
