@@ -148,6 +148,40 @@ describe('pumps', () => {
   });
 });
 
+describe('dead-headed pumps', () => {
+  it('a pump against a shut valve gives its shut-off head and no flow', () => {
+    const s = new Sheet();
+    s.vessel('A', 2);
+    s.pump('P', { headCurve: curve });
+    s.fitting('V', { fittingType: 'gate-valve', closed: true });
+    s.vessel('B', 20, { nozzleZ: 19 });
+    s.pipe('S', at('A', 'N1'), at('P', 'suction'), { length: 5 });
+    s.pipe('D', at('P', 'discharge'), at('V', 'in'), { length: 5 });
+    s.pipe('E', at('V', 'out'), at('B', 'N1'), { length: 5 });
+    const r = solve(s.doc);
+    expect(r.converged).toBe(true);
+    expect(Math.abs(r.pumps.P.flow)).toBeLessThan(1e-8);
+    expect(r.pumps.P.head).toBeCloseTo(40, 6); // shut-off head of the test curve
+    expect(r.nodes.V.ports.in.totalHead).toBeCloseTo(2 + 40, 6);
+  });
+
+  it('two running pumps in series against a capped line settle at twice the shut-off head', () => {
+    const s = new Sheet();
+    s.vessel('A', 2);
+    s.pump('P1', { headCurve: curve });
+    s.pump('P2', { headCurve: curve });
+    s.pipe('S', at('A', 'N1'), at('P1', 'suction'), { length: 0 });
+    s.pipe('M', at('P1', 'discharge'), at('P2', 'suction'), { length: 0 });
+    s.node('waypoint', 'W');
+    s.pipe('D', at('P2', 'discharge'), at('W', 'in'), { length: 0 });
+    const r = solve(s.doc);
+    expectAllFinite(r);
+    expect(r.converged).toBe(true);
+    expect(r.massImbalance).toBeLessThan(1e-9);
+    expect(r.nodes.W.ports.in.totalHead).toBeCloseTo(2 + 80, 5);
+  });
+});
+
 describe('check valve', () => {
   function line(levelA: number, levelB: number) {
     const s = new Sheet();

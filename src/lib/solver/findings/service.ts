@@ -24,22 +24,41 @@ export function pipeService(
   const otherPort = (kind: string, port: string) =>
     kind === 'waypoint' ? (port === 'in' ? 'out' : 'in') : port === 'in' ? 'out' : 'in';
 
-  /** Walks from a pipe in a direction (+1 downstream, −1 upstream) to the port the line ends on. */
-  const walk = (start: Id, direction: 1 | -1): { node: Id; port: string } | null => {
-    let id = start;
+  type End = { node: Id; port: string } | null;
+  const memo: Array<Map<Id, End>> = [new Map(), new Map()];
+
+  /**
+   * The port a line ends on, walking from a pipe with (+1) or against (−1) the flow; every pipe
+   * passed on the way gets the same answer, so the whole sheet costs O(pipes).
+   */
+  const walk = (start: Id, direction: 1 | -1): End => {
+    const known = memo[direction === 1 ? 0 : 1];
+    const chain: Id[] = [];
     const seen = new Set<Id>();
+    let id = start;
+    let end: End = null;
     for (;;) {
-      if (seen.has(id)) return null;
+      if (known.has(id)) {
+        end = known.get(id)!;
+        break;
+      }
+      if (seen.has(id)) break;
       seen.add(id);
+      chain.push(id);
       const gp = graph.pipes.get(id)!;
       const forward = (results.pipes[id]?.flow ?? 0) >= 0;
-      const end = (direction === 1) === forward ? gp.pipe.to : gp.pipe.from;
-      const node = doc.nodes[end.node];
-      if (!INLINE.has(node.kind)) return end;
-      const next = graph.portPipes.get(portKey(node.id, otherPort(node.kind, end.port)))?.[0];
-      if (!next) return null;
+      const ref = (direction === 1) === forward ? gp.pipe.to : gp.pipe.from;
+      const node = doc.nodes[ref.node];
+      if (!INLINE.has(node.kind)) {
+        end = ref;
+        break;
+      }
+      const next = graph.portPipes.get(portKey(node.id, otherPort(node.kind, ref.port)))?.[0];
+      if (!next) break;
       id = next.pipe.id;
     }
+    for (const c of chain) known.set(c, end);
+    return end;
   };
 
   for (const id of graph.pipes.keys()) {

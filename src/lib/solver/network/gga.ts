@@ -26,6 +26,21 @@ export const HEAD_TOLERANCE = 1e-9;
 export const STIFF_SLOPE = 1e8;
 /** Flow tolerance on stiff links, m³/s. */
 export const STIFF_FLOW_TOLERANCE = 1e-9;
+/**
+ * After this many iterations a non-return link still at zero flow (|Q| ≤ LATCH_FLOW) with no
+ * head holding it shut is latched onto its forward law. At a dead end beyond such a link
+ * (e.g. two running pumps in series against a capped line) rounding-level flows would
+ * otherwise flip it between its forward branch and the stiff reverse branch for ever.
+ */
+export const LATCH_AFTER = 25;
+const LATCH_FLOW = 1e-8;
+/**
+ * Head tolerance accepted after LATCH_AFTER iterations, m. Where a lossless link (slope at
+ * MIN_SLOPE) feeds a dead end, rounding of the heads (≈ 1e-14 × head) becomes flow noise of
+ * ≈ 1e-10 m³/s and, through a pump curve's slope, head noise of ≈ 1e-8 m: the iteration cannot
+ * do better than that, so it stops there and reports the residual it reached.
+ */
+export const NOISE_HEAD_TOLERANCE = 1e-7;
 /** Iteration limit. */
 export const MAX_ITERATIONS = 200;
 
@@ -114,10 +129,21 @@ export function gradientSolve(
         law.refresh(0);
         loss[k] = law.headLoss(0);
       }
+      if (
+        law.nonReturn &&
+        !law.forwardOnly &&
+        iteration > LATCH_AFTER &&
+        Math.abs(flows[k]) <= LATCH_FLOW &&
+        drop >= law.headLoss(0) - 1e-6
+      ) {
+        law.forwardOnly = true;
+        loss[k] = law.headLoss(flows[k]);
+      }
       slope[k] = Math.max(law.slope(flows[k]), MIN_SLOPE);
     }
     if (!Number.isFinite(residual)) break;
-    if (iteration > 1 && residual <= HEAD_TOLERANCE && stiffSettled) {
+    const tolerance = iteration > LATCH_AFTER ? NOISE_HEAD_TOLERANCE : HEAD_TOLERANCE;
+    if (iteration > 1 && residual <= tolerance && stiffSettled) {
       converged = true;
       break;
     }
@@ -168,7 +194,8 @@ export function gradientSolve(
     const link = graph.links[k];
     if (!activeLink[k] || link.law === null || link.law.slope(flows[k]) >= STIFF_SLOPE) continue;
     const r = Math.abs(heads[link.from] - heads[link.to] - link.law.headLoss(flows[k]));
-    if (!(r <= HEAD_TOLERANCE)) worst.push([k, Number.isFinite(r) ? r : Infinity]);
+    if (!(r <= (iterations > LATCH_AFTER ? NOISE_HEAD_TOLERANCE : HEAD_TOLERANCE)))
+      worst.push([k, Number.isFinite(r) ? r : Infinity]);
   }
   worst.sort((x, y) => y[1] - x[1]);
 

@@ -38,6 +38,12 @@ export interface LinkLaw {
   readonly initialFlow: number;
   /** True for a non-return link (pump, check valve): reverse flow meets CLOSED_RESISTANCE. */
   readonly nonReturn?: boolean;
+  /**
+   * Set by the iteration on a non-return link that sits at zero flow with no head pushing it
+   * shut: from then on its forward law is used on both sides of Q = 0, so rounding-level flows
+   * do not flip it between branches (see gga.ts).
+   */
+  forwardOnly?: boolean;
 }
 
 /** Pipe cross-section area, m². */
@@ -180,14 +186,16 @@ export class LocalLossLaw implements LinkLaw {
     this.areaNow = area;
   }
 
+  forwardOnly = false;
+
   headLoss(flow: number): number {
-    if (this.nonReturn && flow < 0) return CLOSED_RESISTANCE * flow;
+    if (this.nonReturn && flow < 0 && !this.forwardOnly) return CLOSED_RESISTANCE * flow;
     const v = flow / this.areaNow;
     return (this.kNow * v * Math.abs(v)) / (2 * GRAVITY);
   }
 
   slope(flow: number): number {
-    if (this.nonReturn && flow < 0) return CLOSED_RESISTANCE;
+    if (this.nonReturn && flow < 0 && !this.forwardOnly) return CLOSED_RESISTANCE;
     return (this.kNow * Math.abs(flow)) / (GRAVITY * this.areaNow * this.areaNow);
   }
 }
@@ -229,12 +237,13 @@ export class PumpLaw implements LinkLaw {
     readonly initialFlow: number,
   ) {}
   refresh(): void {}
+  forwardOnly = false;
   headLoss(flow: number): number {
-    if (flow < 0) return -this.head(0) + CLOSED_RESISTANCE * flow;
+    if (flow < 0 && !this.forwardOnly) return -this.head(0) + CLOSED_RESISTANCE * flow;
     return -this.head(flow);
   }
   slope(flow: number): number {
-    if (flow < 0) return CLOSED_RESISTANCE;
+    if (flow < 0 && !this.forwardOnly) return CLOSED_RESISTANCE;
     // Where the curve rises with flow (dH/dQ > 0, near shut-off on some fits) the true slope
     // of the law is negative; its magnitude is used instead, a chord step that keeps the matrix
     // positive definite and does not amplify rounding at a dead end.
