@@ -28,7 +28,9 @@ export function comparisonCellText(
   const v = row.values[index];
   const worst = row.worst === index;
   let note = row.notes[index];
-  if (v === null) return { value: NOT_A_VALUE, note, worst };
+  if (v === null) {
+    return { value: row.key === 'worst-finding' ? 'none' : NOT_A_VALUE, note, worst };
+  }
   if (typeof v !== 'number') return { value: findingText(v), note, worst };
   const quantity = row.quantity ?? 'fraction';
   let value = formatQuantity(v, quantity, system, { digits: 4 });
