@@ -2,9 +2,10 @@ import { test, expect } from '@playwright/test';
 
 test('home page opens the first demo project on the sheet', async ({ page }) => {
   await page.goto('/');
-  await expect(page.getByRole('heading', { name: 'Headroute' })).toBeVisible();
+  // the first load of the dev server can be slow while it prepares modules
+  await expect(page.getByRole('heading', { name: 'Headroute' })).toBeVisible({ timeout: 30_000 });
   // the demo's name in the project name field
-  await expect(page.getByLabel('Project name')).not.toHaveValue('Untitled project');
+  await expect(page.getByLabel('Project name')).toHaveValue(/pipe rack/i, { timeout: 15_000 });
   await expect(page.getByLabel('Project name')).not.toHaveValue('');
   // the parts shelf
   const shelf = page.getByRole('navigation', { name: 'Parts shelf' });

@@ -76,6 +76,17 @@ class Editor {
     return outcome.created;
   }
 
+  /**
+   * Apply a command for an inline editor: returns the refusal message (shown beside the field)
+   * or null when it was applied.
+   */
+  tryDispatch(command: Command): string | null {
+    const outcome = this.#history.apply(command);
+    if (!outcome.ok) return outcome.error.message;
+    this.#sync();
+    return null;
+  }
+
   /** Show why a command was refused. */
   refuse(error: CommandError, at?: { x: number; y: number }): void {
     this.say(error.message, 'error', at);
