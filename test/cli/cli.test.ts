@@ -93,7 +93,7 @@ describe('headroute solve: golden key figures of the demo projects', () => {
     near(pump.head, 31.85);
     near(pump.npshAvailable, 11.95);
     near(pump.npshRequired, 2.878);
-    const flows = new Set(r.pipes.map((p: { flow: number }) => Math.round(p.flow / M3H)));
+    const flows = new Set<number>(r.pipes.map((p: { flow: number }) => Math.round(p.flow / M3H)));
     expect([...flows].sort((a, b) => a - b)).toEqual([6, 20, 46]);
     near(r.route.lowestVapourMargin, 116.3e3);
     // Mass balance: the three branches add up to the pump flow.

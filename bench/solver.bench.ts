@@ -1,0 +1,226 @@
+/**
+ * `npm run bench`: solve time, iterations and memory of generated networks of 100 to 100,000
+ * pipes in three shapes, the fitted scaling exponent, and the time of a profile on the demo
+ * projects. Figures are printed, never asserted (the machine may be shared and busy).
+ */
+import { readdirSync, readFileSync } from 'node:fs';
+import { setFlagsFromString } from 'node:v8';
+import { runInNewContext } from 'node:vm';
+import { parseProjectFile } from '../src/lib/model/file/index';
+import { profile } from '../src/lib/solver/profile';
+import { defaultRoute } from '../src/lib/solver/route';
+import { solve } from '../src/lib/solver/solve';
+import { network, type Shape } from './networks';
+
+const SIZES = [100, 1_000, 10_000, 100_000];
+const SHAPES: Shape[] = ['series', 'tree', 'grid'];
+/** Timed repeats per size: fewer for the big sheets so the whole run stays within minutes. */
+const REPEATS: Record<number, number> = { 100: 9, 1_000: 5, 10_000: 3, 100_000: 1 };
+/** A size is skipped when the previous size's median predicts a solve slower than this, ms. */
+const PREDICTED_LIMIT_MS = 60_000;
+
+// A handle on the garbage collector, so each row starts from a settled heap.
+setFlagsFromString('--expose-gc');
+const gc = runInNewContext('gc') as () => void;
+
+const MB = 1024 * 1024;
+
+function median(values: number[]): number {
+  const s = [...values].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
+
+/** Least-squares slope of ln(time) against ln(pipes). */
+function exponent(points: Array<{ pipes: number; ms: number }>): number {
+  if (points.length < 2) return NaN;
+  const xs = points.map((p) => Math.log(p.pipes));
+  const ys = points.map((p) => Math.log(p.ms));
+  const mx = xs.reduce((a, b) => a + b, 0) / xs.length;
+  const my = ys.reduce((a, b) => a + b, 0) / ys.length;
+  let sxy = 0;
+  let sxx = 0;
+  for (let i = 0; i < xs.length; i++) {
+    sxy += (xs[i] - mx) * (ys[i] - my);
+    sxx += (xs[i] - mx) ** 2;
+  }
+  return sxy / sxx;
+}
+
+function row(cells: Array<string | number>, widths: number[]): string {
+  return cells.map((c, i) => String(c).padStart(widths[i])).join('  ');
+}
+
+function fixed(v: number, digits: number): string {
+  return Number.isFinite(v) ? v.toFixed(digits) : '—';
+}
+
+function benchNetworks(): void {
+  const widths = [7, 8, 8, 11, 10, 6, 10, 12, 12, 10];
+  console.log(
+    'Network solve (median of the timed repeats; one untimed warm-up below 100,000 pipes)',
+  );
+  console.log(
+    row(
+      [
+        'shape',
+        'target',
+        'pipes',
+        'median ms',
+        'min ms',
+        'runs',
+        'iterations',
+        'heap Δ MB',
+        'RSS peak MB',
+        'converged',
+      ],
+      widths,
+    ),
+  );
+  const fits: string[] = [];
+  for (const shape of SHAPES) {
+    const points: Array<{ pipes: number; ms: number }> = [];
+    for (const size of SIZES) {
+      const last = points[points.length - 1];
+      if (last) {
+        const k = Math.max(1, points.length >= 2 ? exponent(points) : 1);
+        const predicted = last.ms * (size / last.pipes) ** k;
+        if (predicted > PREDICTED_LIMIT_MS) {
+          console.log(
+            row(
+              [
+                shape,
+                size,
+                '—',
+                `skipped: predicted ${(predicted / 1000).toFixed(0)} s`,
+                '',
+                '',
+                '',
+                '',
+                '',
+                '',
+              ],
+              widths,
+            ),
+          );
+          continue;
+        }
+      }
+      const doc = network(shape, size);
+      const pipes = Object.keys(doc.pipes).length;
+      const repeats = REPEATS[size];
+      if (size < 100_000) solve(doc);
+      gc();
+      const base = process.memoryUsage().heapUsed;
+      let heapPeak = 0;
+      const times: number[] = [];
+      let iterations = 0;
+      let converged = true;
+      for (let r = 0; r < repeats; r++) {
+        const t0 = performance.now();
+        const result = solve(doc);
+        times.push(performance.now() - t0);
+        heapPeak = Math.max(heapPeak, process.memoryUsage().heapUsed - base);
+        iterations = result.iterations;
+        converged &&= result.converged;
+      }
+      const rss = process.resourceUsage().maxRSS / 1024;
+      const ms = median(times);
+      points.push({ pipes, ms });
+      console.log(
+        row(
+          [
+            shape,
+            size,
+            pipes,
+            fixed(ms, 2),
+            fixed(Math.min(...times), 2),
+            repeats,
+            iterations,
+            fixed(heapPeak / MB, 1),
+            fixed(rss, 0),
+            converged ? 'yes' : 'NO',
+          ],
+          widths,
+        ),
+      );
+    }
+    const big = points.filter((p) => p.pipes >= 1000);
+    fits.push(
+      `${shape.padStart(7)}: exponent ${fixed(exponent(points), 2)} over ${points.length} sizes` +
+        (big.length >= 2
+          ? `, ${fixed(exponent(big), 2)} over ${big.length} sizes of ≥ 1,000 pipes`
+          : ''),
+    );
+  }
+  console.log('\nFitted scaling exponent (least squares of ln time against ln pipes; 1 = linear)');
+  for (const f of fits) console.log(f);
+  console.log(
+    '\nheap Δ: largest heap in use right after a solve, above the settled heap before the row ' +
+      '(results plus garbage not yet collected). RSS peak: the process high-water mark so far.',
+  );
+}
+
+function benchDemos(): void {
+  const dir = new URL('../static/examples/', import.meta.url);
+  let files: string[];
+  try {
+    files = readdirSync(dir).filter((f) => f.endsWith('.headroute.json'));
+  } catch {
+    files = [];
+  }
+  console.log('\nDemo projects: solve, default route and profile (median of 50 runs each)');
+  if (files.length === 0) {
+    console.log('  no demo projects found in static/examples/');
+    return;
+  }
+  const widths = [40, 6, 9, 11, 11, 13, 9];
+  console.log(
+    row(['file', 'pipes', 'stations', 'solve ms', 'route ms', 'profile ms', 'total ms'], widths),
+  );
+  for (const file of files.sort()) {
+    const parsed = parseProjectFile(readFileSync(new URL(file, dir), 'utf8'));
+    if (!parsed.ok) {
+      console.log(`  ${file}: not a valid project (${parsed.errors[0]?.message})`);
+      continue;
+    }
+    const doc = parsed.document;
+    const t = { solve: [] as number[], route: [] as number[], profile: [] as number[] };
+    let stations = 0;
+    for (let i = 0; i < 55; i++) {
+      const t0 = performance.now();
+      const result = solve(doc);
+      const t1 = performance.now();
+      const nodes = defaultRoute(doc, result);
+      const t2 = performance.now();
+      const prof = nodes ? profile(doc, result, nodes) : null;
+      const t3 = performance.now();
+      stations = prof?.stations.length ?? 0;
+      if (i < 5) continue; // warm-up
+      t.solve.push(t1 - t0);
+      t.route.push(t2 - t1);
+      t.profile.push(t3 - t2);
+    }
+    const [s, r, p] = [median(t.solve), median(t.route), median(t.profile)];
+    console.log(
+      row(
+        [
+          file,
+          Object.keys(doc.pipes).length,
+          stations,
+          fixed(s, 3),
+          fixed(r, 3),
+          fixed(p, 3),
+          fixed(s + r + p, 3),
+        ],
+        widths,
+      ),
+    );
+  }
+}
+
+const started = performance.now();
+console.log(`headroute bench — Node ${process.version}, ${new Date().toISOString()}\n`);
+benchNetworks();
+benchDemos();
+console.log(`\nBench took ${((performance.now() - started) / 1000).toFixed(0)} s.`);
