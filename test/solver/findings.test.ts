@@ -236,3 +236,28 @@ describe('control valve (IEC 60534-2-1)', () => {
     expect(withCode(r, 'control-valve-choked')[0].message).toContain('LV-101');
   });
 });
+
+describe('liquid properties', () => {
+  it('a temperature outside a user table is a caution naming the liquid', () => {
+    const s = new Sheet();
+    s.vessel('A', 10);
+    s.vessel('B', 5);
+    s.pipe('P1', at('A', 'N1'), at('B', 'N1'));
+    // Invented test table covering 10–40 °C; the project runs at 70 °C.
+    s.doc.settings.liquid = {
+      kind: 'user',
+      name: 'Brine 20 %',
+      table: [
+        { temperature: 283.15, density: 1160, viscosity: 2.2e-3, vapourPressure: 1000 },
+        { temperature: 313.15, density: 1150, viscosity: 1.3e-3, vapourPressure: 6000 },
+      ],
+    };
+    s.doc.settings.temperature = 343.15;
+    const r = solve(s.doc);
+    expectAllFinite(r);
+    const f = withCode(r, 'property-extrapolated');
+    expect(f).toHaveLength(1);
+    expect(f[0].level).toBe('caution');
+    expect(f[0].message).toContain('Brine 20 %');
+  });
+});

@@ -35,7 +35,9 @@ const element = fc.record({
  * converges with continuity at every node to 1e-9 m³/s and the EGL bookkeeping of every pipe to
  * 1e-6 m, or it returns a stop finding naming the elements.
  */
-function treeSheet(items: Array<fc.RecordValue<typeof element>>) {
+type Item = typeof element extends fc.Arbitrary<infer T> ? T : never;
+
+function treeSheet(items: Item[]) {
   const s = new Sheet();
   s.vessel('n0', 10);
   const kinds: Kind[] = ['vessel'];
@@ -61,7 +63,7 @@ function treeSheet(items: Array<fc.RecordValue<typeof element>>) {
       from = at(parentId, kinds[parent] === 'pump' ? 'discharge' : 'out');
       outUsed[parent] = true;
     }
-    let to: PortRef;
+    let to: PortRef = at(id, 'hub');
     switch (item.kind) {
       case 'junction':
         s.node('junction', id, { z: item.z });

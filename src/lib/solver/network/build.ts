@@ -77,9 +77,12 @@ function getNode(doc: HeadrouteDocument, id: Id): SheetNode | undefined {
   return Object.hasOwn(doc.nodes, id) ? doc.nodes[id] : undefined;
 }
 
-function pipeDiameter(pipe: Pipe): number | undefined {
+function pipeDiameter(pipe: Pipe, cache: Map<string, number | undefined>): number | undefined {
   if (pipe.bore.mode === 'typed') return pipe.bore.innerDiameter;
-  return catalogueInnerDiameter(pipe.bore.nominalSize, pipe.bore.schedule);
+  const key = `${pipe.bore.nominalSize}\u0000${pipe.bore.schedule}`;
+  if (!cache.has(key))
+    cache.set(key, catalogueInnerDiameter(pipe.bore.nominalSize, pipe.bore.schedule));
+  return cache.get(key);
 }
 
 function pipeRoughness(pipe: Pipe): number {
@@ -176,6 +179,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   const links: HydraulicLink[] = [];
   const pipes = new Map<Id, GraphPipe>();
   const portPipes = new Map<string, GraphPipe[]>();
+  const boreCache = new Map<string, number | undefined>();
   for (const pipe of Object.values(doc.pipes)) {
     const ends: Array<[PortRef, 'from' | 'to']> = [
       [pipe.from, 'from'],
@@ -192,7 +196,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       } else if (!usable.has(node.id)) broken = true;
     }
     if (broken) continue;
-    const diameter = pipeDiameter(pipe);
+    const diameter = pipeDiameter(pipe, boreCache);
     const roughness = pipeRoughness(pipe);
     if (diameter === undefined || !(diameter > 0) || !Number.isFinite(diameter)) {
       const what =
