@@ -150,6 +150,24 @@ describe('placeInLanes', () => {
     expect(placed[1].centre).toBe(120);
   });
 
+  it('places by priority first and leaves out what fits nowhere when asked to', () => {
+    const placed = placeInLanes(
+      [
+        { anchor: 100, width: 60, priority: 4 },
+        { anchor: 110, width: 60, priority: 0 },
+        { anchor: 120, width: 60, priority: 4 },
+      ],
+      { min: 0, max: 1000 },
+      4,
+      2,
+      'drop',
+    );
+    // The priority-0 label takes lane 0 at its anchor; one of the others gets lane 1.
+    expect(placed[1]).toEqual({ left: 80, centre: 110, lane: 0 });
+    expect(placed[0]).toEqual({ left: 70, centre: 100, lane: 1 });
+    expect(placed[2]).toBeNull();
+  });
+
   it('keeps labels inside the bounds', () => {
     const [p] = placeInLanes([{ anchor: 5, width: 40 }], { min: 0, max: 100 });
     expect(p.left).toBe(0);

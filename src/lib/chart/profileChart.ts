@@ -148,7 +148,8 @@ export interface ProfileGeometry {
   elevationRange: [number, number];
 }
 
-const DEFAULT_MARGIN: ChartMargin = { top: 44, right: 20, bottom: 92, left: 64 };
+/** Side margins, px; top and bottom default to what the labels above and below need. */
+const DEFAULT_MARGIN = { right: 20, left: 64 };
 const LINE_GAP = 1.25;
 
 /**
@@ -164,15 +165,14 @@ export function profileGeometry(
 ): ProfileGeometry {
   const { system } = options;
   const fontSize = options.fontSize ?? 11;
-  const margin = { ...DEFAULT_MARGIN, ...options.margin };
+  const lineHeight = fontSize * LINE_GAP;
   const stations = profile.stations;
   const pipeLine = stations.filter(isPipeStation);
-  const plot = {
-    left: margin.left,
-    top: margin.top,
-    width: Math.max(10, size.width - margin.left - margin.right),
-    height: Math.max(10, size.height - margin.top - margin.bottom),
-  };
+  const left = options.margin?.left ?? DEFAULT_MARGIN.left;
+  const right = options.margin?.right ?? DEFAULT_MARGIN.right;
+  // Top and bottom are set once the labels above and below the plot are placed (they depend
+  // on the x scale only), so a short chart gives its height to the plot, not to empty lanes.
+  const plot = { left, top: 0, width: Math.max(10, size.width - left - right), height: 0 };
 
   const chainageRange = finiteExtent(stations.map((s) => s.chainage)) ?? [0, 1];
   const shown = options.chainageWindow ?? chainageRange;
@@ -182,20 +182,35 @@ export function profileGeometry(
   const xScale = scaleLinear()
     .domain([len(c0), len(c1)])
     .range([plot.left, plot.left + plot.width]);
+  const x = (c: number) => xScale(len(c));
+  const chainageAt = (px: number) => fromDisplay(xScale.invert(px), 'length', system);
+  const inWindow = (c: number) => c >= c0 - 1e-9 && c <= c1 + 1e-9;
+
+  const kindOf = (id: Id): NodeKind | null => options.nodes?.[id]?.kind ?? null;
+  const places = nodePlaces(profile.route ?? [], pipeLine, kindOf);
+  const labelDraft = placeLabels(
+    places.filter((n) => inWindow(n.chainage)),
+    // A short chart keeps fewer label lanes; labels that do not fit are left out.
+    { nodes: options.nodes, fontSize, x, plot, maxLanes: size.height < 320 ? 2 : 4 },
+  );
+  const spanDraft = placeSpans(markedSpans(stations), { x, system, fontSize, plot, c0, c1 });
+  const spanLanes = Math.max(0, ...spanDraft.map((s) => s.lane + 1));
+  const labelLanes = Math.max(0, ...labelDraft.map((l) => l.lane + 1));
+  plot.top = options.margin?.top ?? 12 + spanLanes * lineHeight;
+  const bottom = options.margin?.bottom ?? (labelLanes ? 40 + labelLanes * lineHeight : 38);
+  plot.height = Math.max(10, size.height - plot.top - bottom);
+  const axisY = plot.top + plot.height;
 
   const heads = stations.flatMap((s) => [s.elevation, s.hgl, s.egl, s.vapourLine]);
   const [h0, h1] = finiteExtent(heads) ?? [0, 1];
   const pad = Math.max((h1 - h0) * 0.08, 0.5);
-  const yScale = scaleLinear().range([plot.top + plot.height, plot.top]);
+  const yScale = scaleLinear().range([axisY, plot.top]);
   if (options.elevationWindow) {
     yScale.domain(options.elevationWindow.map(elev));
   } else {
     yScale.domain([elev(h0 - pad), elev(h1 + pad)]).nice();
   }
-
-  const x = (c: number) => xScale(len(c));
   const y = (h: number) => yScale(elev(h));
-  const chainageAt = (px: number) => fromDisplay(xScale.invert(px), 'length', system);
   const elevationAt = (py: number) => fromDisplay(yScale.invert(py), 'elevation', system);
 
   const pathOf = (points: readonly Station[], value: (s: Station) => number) =>
@@ -217,21 +232,23 @@ export function profileGeometry(
     d: pathOf(run, (s) => s.elevation),
   }));
 
-  const kindOf = (id: Id): NodeKind | null => options.nodes?.[id]?.kind ?? null;
-  const nodes = nodeMarks(profile.route ?? [], pipeLine, kindOf, x, y);
+  const nodes: NodeMark[] = places.map((p) => ({
+    elementId: p.elementId,
+    kind: p.kind,
+    chainage: p.chainage,
+    x: x(p.chainage),
+    y: y(p.elevation),
+  }));
   const steps = nodeSteps(pipeLine, x, y);
   const levels = levelMarks(stations, options.nodes, x, y, plot);
-
-  const inWindow = (c: number) => c >= c0 - 1e-9 && c <= c1 + 1e-9;
-  const spans = placeSpans(markedSpans(stations), { x, system, fontSize, plot, c0, c1 });
-  const labels = placeLabels(
-    nodes.filter((n) => inWindow(n.chainage)),
-    {
-      nodes: options.nodes,
-      fontSize,
-      plot,
-    },
-  );
+  const labels: ElementLabel[] = labelDraft.map(({ lane, ...l }) => ({
+    ...l,
+    y: axisY + 44 + lane * lineHeight,
+  }));
+  const spans: PlacedSpan[] = spanDraft.map(({ lane, ...s }) => ({
+    ...s,
+    labelY: plot.top - 6 - lane * lineHeight,
+  }));
   const npsh = npshNotes(pipeLine, options.pumps, { x, y, system, fontSize, plot, inWindow });
 
   const ticks = {
@@ -289,39 +306,44 @@ function groupRuns(stations: readonly Station[]): Station[][] {
   return runs;
 }
 
+/** Where a node of the route sits: its chainage and the pipe elevation there, m. */
+interface NodePlace {
+  elementId: Id;
+  kind: NodeKind | null;
+  chainage: number;
+  elevation: number;
+}
+
 /**
  * Where each node of the route sits. Pipe runs k and k + 1 meet at route node k + 1, so nodes
  * without stations of their own (waypoints, junctions; vessels, which only have a level
  * station) are found at the pipe ends. Without a matching route, nodes with stations are used.
  */
-function nodeMarks(
+function nodePlaces(
   route: readonly Id[],
   line: readonly Station[],
   kindOf: (id: Id) => NodeKind | null,
-  x: (c: number) => number,
-  y: (h: number) => number,
-): NodeMark[] {
-  const mark = (elementId: Id, s: Station): NodeMark => ({
+): NodePlace[] {
+  const place = (elementId: Id, s: Station): NodePlace => ({
     elementId,
     kind: kindOf(elementId),
     chainage: s.chainage,
-    x: x(s.chainage),
-    y: y(s.elevation),
+    elevation: s.elevation,
   });
   const runs = groupRuns(line.filter((s) => s.at === 'pipe'));
   if (route.length >= 2 && runs.length === route.length - 1) {
     return route.map((id, k) => {
       const own = line.find((s) => s.elementId === id && s.at !== 'pipe');
-      if (own) return mark(id, own);
-      return mark(id, k < runs.length ? runs[k][0] : runs[k - 1][runs[k - 1].length - 1]);
+      if (own) return place(id, own);
+      return place(id, k < runs.length ? runs[k][0] : runs[k - 1][runs[k - 1].length - 1]);
     });
   }
-  const marks: NodeMark[] = [];
+  const places: NodePlace[] = [];
   for (const s of line) {
-    if (s.at === 'pipe' || marks.some((m) => m.elementId === s.elementId)) continue;
-    marks.push(mark(s.elementId, s));
+    if (s.at === 'pipe' || places.some((m) => m.elementId === s.elementId)) continue;
+    places.push(place(s.elementId, s));
   }
-  return marks;
+  return places;
 }
 
 function nodeSteps(
@@ -396,7 +418,10 @@ export function spanText(span: MarkedSpan, system: UnitSystem): string {
   return `${what}: min ${pa} (${m}) at ${at}`;
 }
 
-function placeSpans(spans: MarkedSpan[], ctx: SpanContext): PlacedSpan[] {
+function placeSpans(
+  spans: MarkedSpan[],
+  ctx: SpanContext,
+): Array<Omit<PlacedSpan, 'labelY'> & { lane: number }> {
   const { x, plot, fontSize } = ctx;
   const visible = spans.filter((s) => s.end >= ctx.c0 && s.start <= ctx.c1);
   const texts = visible.map((s) => spanText(s, ctx.system));
@@ -415,7 +440,7 @@ function placeSpans(spans: MarkedSpan[], ctx: SpanContext): PlacedSpan[] {
     x1: x(s.end),
     text: texts[i],
     labelX: lanes[i].centre,
-    labelY: plot.top - 6 - lanes[i].lane * fontSize * LINE_GAP,
+    lane: lanes[i].lane,
   }));
 }
 
@@ -423,30 +448,57 @@ function clampX(px: number, plot: ProfileGeometry['plot']): number {
   return Math.min(plot.left + plot.width, Math.max(plot.left, px));
 }
 
+/** Which labels win a crowded axis: ends and machines first, then waypoints, then fittings. */
+const LABEL_PRIORITY: Record<NodeKind, number> = {
+  vessel: 0,
+  boundary: 0,
+  pump: 1,
+  'control-valve': 2,
+  waypoint: 3,
+  fitting: 4,
+  junction: 5,
+};
+
 function placeLabels(
-  marks: NodeMark[],
-  ctx: { nodes?: Record<Id, SheetNode>; fontSize: number; plot: ProfileGeometry['plot'] },
-): ElementLabel[] {
-  const named = marks
-    .map((m) => ({ mark: m, node: ctx.nodes?.[m.elementId] }))
-    .filter((e): e is { mark: NodeMark; node: SheetNode } => e.node !== undefined);
+  places: NodePlace[],
+  ctx: {
+    nodes?: Record<Id, SheetNode>;
+    fontSize: number;
+    maxLanes: number;
+    x: (c: number) => number;
+    plot: { left: number; width: number };
+  },
+): Array<Omit<ElementLabel, 'y'> & { lane: number }> {
+  const named = places
+    .map((p) => ({ place: p, node: ctx.nodes?.[p.elementId] }))
+    .filter((e): e is { place: NodePlace; node: SheetNode } => e.node !== undefined);
   const texts = named.map((e) => e.node.name || e.node.id);
   const lanes = placeInLanes(
-    named.map((e, i) => ({ anchor: e.mark.x, width: estimateTextWidth(texts[i], ctx.fontSize) })),
+    named.map((e, i) => ({
+      anchor: ctx.x(e.place.chainage),
+      width: estimateTextWidth(texts[i], ctx.fontSize),
+      priority: LABEL_PRIORITY[e.node.kind],
+    })),
     { min: 0, max: ctx.plot.left + ctx.plot.width + 16 },
     8,
-    4,
+    ctx.maxLanes,
+    'drop',
   );
-  const axisY = ctx.plot.top + ctx.plot.height;
-  return named.map((e, i) => ({
-    elementId: e.mark.elementId,
-    kind: e.node.kind,
-    text: texts[i],
-    chainage: e.mark.chainage,
-    anchorX: e.mark.x,
-    x: lanes[i].centre,
-    y: axisY + 44 + lanes[i].lane * ctx.fontSize * LINE_GAP,
-  }));
+  const out: Array<Omit<ElementLabel, 'y'> & { lane: number }> = [];
+  named.forEach((e, i) => {
+    const lane = lanes[i];
+    if (!lane) return;
+    out.push({
+      elementId: e.place.elementId,
+      kind: e.node.kind,
+      text: texts[i],
+      chainage: e.place.chainage,
+      anchorX: ctx.x(e.place.chainage),
+      x: lane.centre,
+      lane: lane.lane,
+    });
+  });
+  return out;
 }
 
 function npshNotes(
@@ -475,7 +527,12 @@ function npshNotes(
     return { s, p, lines, width: estimateTextWidth(lines[0], ctx.fontSize) };
   });
   const lanes = placeInLanes(
-    notes.map((n) => ({ anchor: ctx.x(n.s.chainage) - n.width / 2 - 6, width: n.width })),
+    notes.map((n) => {
+      // Left of the suction when there is room, else right of it (clear of the pump's step).
+      const sx = ctx.x(n.s.chainage);
+      const leftRoom = sx - n.width - 6 >= ctx.plot.left + 2;
+      return { anchor: leftRoom ? sx - n.width / 2 - 6 : sx + n.width / 2 + 6, width: n.width };
+    }),
     { min: ctx.plot.left + 2, max: ctx.plot.left + ctx.plot.width - 2 },
     6,
     3,
