@@ -101,6 +101,19 @@ test('a hot-liquid case on demo 1 becomes the worst NPSH case in the comparison'
   }
   await page.screenshot({ path: `${SHOTS}/cases-compare.png` });
 
+  // On the profile, the envelope across cases names the hot case at the pump's suction.
+  await page
+    .getByRole('dialog', { name: 'Cases compared' })
+    .getByRole('button', { name: 'Close' })
+    .click();
+  const profile = page.getByTestId('profile-panel');
+  await expect(profile.locator('[data-envelope="band"]')).toHaveAttribute('d', /^M[\d.]+ [\d.]+L/);
+  const pumpMark = profile.locator(`[data-envelope-pump="${pumpId}"]`);
+  await expect(pumpMark).toHaveAttribute('data-worst-case', HOT_NAME);
+  await expect(pumpMark).toContainText(`least NPSH margin: ${HOT_NAME}`);
+  await page.screenshot({ path: `${SHOTS}/cases-envelope.png` });
+  await panel.getByRole('button', { name: 'Compare' }).click();
+
   // The table follows edits: a cooler hot case is no longer the worst NPSHa.
   const temperature = panel.getByRole('textbox', { name: 'Temperature' });
   await temperature.fill('40 °C');
