@@ -4,7 +4,7 @@
  * markup to prove they stay text.
  */
 import { execFile } from 'node:child_process';
-import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { mkdtemp, readFile, readdir, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { promisify } from 'node:util';
@@ -12,7 +12,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { main } from '../../src/cli/main';
 import type { CliIo } from '../../src/cli/io';
 import { escapeHtml } from '../../src/lib/report/html';
-import { serializeProject } from '../../src/lib/model/file';
+import { parseProjectFile, serializeProject } from '../../src/lib/model/file';
 import type { HeadrouteDocument } from '../../src/lib/model/types';
 import { formatQuantity } from '../../src/lib/units';
 import { Sheet, at } from '../solver/helpers';
@@ -149,5 +149,72 @@ describe('headroute review', () => {
     const io = captureIo();
     expect(await main(['--help'], io)).toBe(0);
     expect(io.stdout).toContain('headroute review FILE [--out FILE.html]');
+  });
+});
+
+describe('headroute review on the demo projects', async () => {
+  const examples = 'static/examples';
+  const demos = (await readdir(examples)).filter((f) => f.endsWith('.headroute.json')).sort();
+
+  it('finds the demo projects', () => {
+    expect(demos).toContain('pump-over-rack.headroute.json');
+  });
+
+  for (const demo of demos) {
+    it(`${demo}: caution, findings, each stored route's profile and the tables`, async () => {
+      const path = join(examples, demo);
+      const parsed = parseProjectFile(await readFile(path, 'utf8'));
+      if (!parsed.ok) throw new Error(`${demo} does not parse`);
+      const doc = parsed.document;
+      const io = captureIo();
+      expect(await main(['review', path, '--date', '2026-05-06'], io), io.stderr).toBe(0);
+      const html = io.stdout;
+      const solveIo = captureIo();
+      expect(await main(['solve', path, '--format', 'json'], solveIo)).toBe(0);
+      const solved = JSON.parse(solveIo.stdout);
+
+      expect(html).toContain('verify in detailed design against the applicable codes');
+      expect(html).toContain(`<title>Review sheet — ${escapeHtml(doc.name)}</title>`);
+      const routes = Object.values(doc.routes);
+      for (const r of routes) {
+        const figure = html.indexOf(`<figure data-route="${escapeHtml(r.name)}">`);
+        expect(figure, r.name).toBeGreaterThan(0);
+        expect(html.indexOf('data-line="hgl"', figure)).toBeGreaterThan(figure);
+      }
+      if (routes.length === 0) expect(html).toContain('<figure data-route="Default route">');
+      expect(html).toContain('<caption>Pipes</caption>');
+      expect(html).toContain('<section id="findings">');
+      for (const f of solved.findings) {
+        if (f.chainage === undefined) expect(html).toContain(escapeHtml(f.message));
+      }
+      for (const c of Object.values(doc.cases)) {
+        expect(html).toContain(`<th>${escapeHtml(c.name)}</th>`); // a comparison column
+      }
+      for (const p of solved.pumps) {
+        expect(html).toContain(
+          `<td class="num">${formatQuantity(p.flow, 'volumeFlow', 'SI')}</td>`,
+        );
+      }
+      expect(html.toLowerCase()).not.toContain('<script');
+    });
+  }
+
+  it('keeps markup typed into a demo’s names as text', async () => {
+    const path = join(examples, 'pump-over-rack.headroute.json');
+    const parsed = parseProjectFile(await readFile(path, 'utf8'));
+    if (!parsed.ok) throw new Error('demo 1 does not parse');
+    const doc = parsed.document;
+    const pump = Object.values(doc.nodes).find((n) => n.kind === 'pump')!;
+    pump.name = '<svg onload=alert(1)>P-101';
+    const firstCase = Object.values(doc.cases)[0];
+    firstCase.name = 'Low & "dry" <case>';
+    const hostile = join(dir, 'hostile-demo.headroute.json');
+    await writeFile(hostile, serializeProject(doc), 'utf8');
+    const io = captureIo();
+    expect(await main(['review', hostile], io), io.stderr).toBe(0);
+    expect(io.stdout).toContain('&lt;svg onload=alert(1)&gt;P-101');
+    expect(io.stdout).toContain('Low &amp; &quot;dry&quot; &lt;case&gt;');
+    expect(io.stdout).not.toContain('<svg onload');
+    expect(io.stdout).not.toContain('<case>');
   });
 });
