@@ -128,14 +128,14 @@ class Editor {
   }
 
   /** Replace the document (new, open, demo, restore): not undoable, clears history and selection. */
-  load(doc: HeadrouteDocument, fileName: string | null = null): void {
+  load(doc: HeadrouteDocument, fileName: string | null = null, unsaved = false): void {
     this.#history.reset(doc);
     this.selection = [];
     this.hover = null;
     this.caseId = null;
     this.fileName = fileName;
     this.#sync();
-    this.savedRevision = this.revision;
+    this.savedRevision = unsaved ? -1 : this.revision;
     this.fitRequest++;
   }
 

@@ -7,6 +7,7 @@ import { base } from '$app/paths';
 import { createDocument } from '../model/defaults';
 import { parseProjectFile, projectFileName, serializeProject } from '../model/file';
 import { loadExample, type ExampleProject } from '../model/examples';
+import { clearAutosave, createAutosaver, loadAutosave } from '../model/storage/autosave';
 import type { HeadrouteDocument } from '../model/types';
 import { editor } from './editor.svelte';
 
@@ -83,4 +84,53 @@ export function saveProject(): void {
   setTimeout(() => URL.revokeObjectURL(url), 1000);
   editor.markSaved(name);
   editor.say(`Saved ${name}.`);
+}
+
+/** What the restore notice shows after a reload brought back autosaved work. */
+export interface RestoreNotice {
+  text: string;
+  level: 'info' | 'error';
+}
+
+/**
+ * At start-up: bring back the autosaved project if there is one (unsaved, so the guard still
+ * asks), otherwise open the first demo. Returns a notice for the user, or null.
+ */
+export async function startUp(firstDemo: ExampleProject): Promise<RestoreNotice | null> {
+  let restored: Awaited<ReturnType<typeof loadAutosave>> = null;
+  try {
+    restored = await loadAutosave();
+  } catch {
+    restored = null;
+  }
+  if (restored?.ok) {
+    editor.load(restored.document, null, true);
+    const when = restored.savedAt ? new Date(restored.savedAt).toLocaleString() : 'earlier';
+    return {
+      text: `Restored “${restored.document.name}” from the autosave of ${when}.`,
+      level: 'info',
+    };
+  }
+  await openDemo(firstDemo, false);
+  if (restored && !restored.ok) {
+    return {
+      text: `The autosaved copy could not be read (${restored.errors[0]?.message ?? 'unknown problem'}); it is kept until you clear it.`,
+      level: 'error',
+    };
+  }
+  return null;
+}
+
+/** Keep an autosave of the document, at most once a second, and on page hide. */
+export function startAutosave(): { schedule(doc: HeadrouteDocument): void; flush(): void } {
+  const saver = createAutosaver({
+    delayMs: 1000,
+    onError: (error) => editor.say(`Autosave failed: ${String(error)}`, 'error'),
+  });
+  return { schedule: (doc) => saver.schedule(doc), flush: () => void saver.flush() };
+}
+
+/** Forget the autosaved copy. */
+export async function discardAutosave(): Promise<void> {
+  await clearAutosave();
 }
