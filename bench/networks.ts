@@ -63,25 +63,28 @@ function tree(n: number): HeadrouteDocument {
   b.node('junction', 'J0', { z: 0 });
   b.pipe({ node: 'S', port: 'N1' }, { node: 'J0', port: 'hub' }, 20, 0.3);
   const queue: Array<{ id: Id; depth: number }> = [{ id: 'J0', depth: 0 }];
-  const children = new Map<Id, number>();
+  const parents = new Set<Id>();
+  /** The pipe that feeds each junction, so a leaf's pipe can be moved onto its boundary port. */
+  const feed = new Map<Id, Id>();
   let next = 1;
-  while (b.count() < n && queue.length > 0) {
-    const parent = queue.shift()!;
+  for (let head = 0; b.count() < n && head < queue.length; head++) {
+    const parent = queue[head];
     for (let c = 0; c < 2 && b.count() < n; c++) {
       const id = `J${next++}`;
       b.node('junction', id, { z: 0 });
       const diameter = Math.max(0.025, 0.3 * Math.pow(0.8, parent.depth + 1));
       b.pipe({ node: parent.id, port: 'hub' }, { node: id, port: 'hub' }, 30, diameter);
-      children.set(parent.id, (children.get(parent.id) ?? 0) + 1);
+      feed.set(id, `L${b.count()}`);
+      parents.add(parent.id);
       queue.push({ id, depth: parent.depth + 1 });
     }
   }
   // Leaves become boundaries at atmospheric pressure: the liquid leaves the sheet there.
-  for (const [id, node] of Object.entries(b.doc.nodes)) {
-    if (node.kind !== 'junction' || children.has(id)) continue;
+  for (const [id, pipeId] of feed) {
+    if (parents.has(id)) continue;
     const boundary = createNode('boundary', { x: 0, y: 0 }, id) as Boundary;
     b.doc.nodes[id] = { ...boundary, z: 0, pressureAbs: 101_325 };
-    for (const pipe of Object.values(b.doc.pipes)) if (pipe.to.node === id) pipe.to.port = 'p';
+    b.doc.pipes[pipeId].to.port = 'p';
   }
   return b.doc;
 }

@@ -17,7 +17,7 @@ const SHAPES: Shape[] = ['series', 'tree', 'grid'];
 /** Timed repeats per size: fewer for the big sheets so the whole run stays within minutes. */
 const REPEATS: Record<number, number> = { 100: 9, 1_000: 5, 10_000: 3, 100_000: 1 };
 /** A size is skipped when the previous size's median predicts a solve slower than this, ms. */
-const PREDICTED_LIMIT_MS = 60_000;
+const PREDICTED_LIMIT_MS = 45_000;
 
 // A handle on the garbage collector, so each row starts from a settled heap.
 setFlagsFromString('--expose-gc');
