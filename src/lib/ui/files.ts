@@ -97,12 +97,8 @@ export interface RestoreNotice {
  * asks), otherwise open the first demo. Returns a notice for the user, or null.
  */
 export async function startUp(firstDemo: ExampleProject): Promise<RestoreNotice | null> {
-  let restored: Awaited<ReturnType<typeof loadAutosave>> = null;
-  try {
-    restored = await loadAutosave();
-  } catch {
-    restored = null;
-  }
+  // An unreadable IndexedDB (private mode, blocked storage) simply means nothing to restore.
+  const restored = await loadAutosave().catch(() => null);
   if (restored?.ok) {
     editor.load(restored.document, null, true);
     const when = restored.savedAt ? new Date(restored.savedAt).toLocaleString() : 'earlier';
