@@ -2,10 +2,12 @@
  * Profile stations along a route: order, stations at nodes, grade-line steps, the vapour line,
  * pressures and the energy balance along the route.
  */
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { parseProjectFile } from '../../src/lib/model/file';
 import type { Fitting, HeadrouteDocument } from '../../src/lib/model/types';
 import { profile } from '../../src/lib/solver/profile';
-import { RouteError } from '../../src/lib/solver/route';
+import { defaultRoute, RouteError } from '../../src/lib/solver/route';
 import { solve } from '../../src/lib/solver/solve';
 import type { Profile, SolveResult, Station } from '../../src/lib/solver/types';
 import { at, Sheet } from './helpers';
@@ -212,4 +214,59 @@ describe('profile grade-line steps and routes', () => {
     expect(() => profile(s.doc, result, ['A', 'nowhere'])).toThrow(RouteError);
     expect(() => profile(s.doc, result, ['A', 'lonely'])).toThrow(/No pipe path/);
   });
+});
+
+describe('energy along the default route of each demo project', () => {
+  const files = [
+    'pump-over-rack.headroute.json',
+    'siphon-over-bund.headroute.json',
+    'branched-with-recirculation.headroute.json',
+  ];
+
+  /** EGL drop from station a to the next station b that the solve's losses and heads predict, m. */
+  function predictedDrop(doc: HeadrouteDocument, result: SolveResult, a: Station, b: Station) {
+    const g2 = 2 * G;
+    const nozzleK = (vesselId: string, pipeId: string, which: 'entranceK' | 'exitK') => {
+      const pipe = doc.pipes[pipeId];
+      const ref = pipe.from.node === vesselId ? pipe.from : pipe.to;
+      const vessel = doc.nodes[vesselId];
+      if (vessel.kind !== 'vessel') throw new Error('not a vessel');
+      return vessel.nozzles.find((n) => n.id === ref.port)![which];
+    };
+    const vh = (pipeId: string) => result.pipes[pipeId].velocity ** 2 / g2;
+    if (a.at === 'pipe' && b.at === 'pipe' && a.elementId === b.elementId) {
+      const length = doc.pipes[a.elementId].length;
+      return (result.pipes[a.elementId].frictionLoss * (b.chainage - a.chainage)) / length;
+    }
+    if (a.at === 'level') return nozzleK(a.elementId, b.elementId, 'entranceK') * vh(b.elementId);
+    if (b.at === 'level') return nozzleK(b.elementId, a.elementId, 'exitK') * vh(a.elementId);
+    if (a.at === 'node-in' && b.at === 'node-out') {
+      const pump = result.pumps[a.elementId];
+      return pump ? -pump.head : result.nodes[a.elementId].headLoss!;
+    }
+    return 0; // a pipe end and the port it sits on, or two pipes meeting at a junction or waypoint
+  }
+
+  for (const file of files) {
+    it(`${file}: every EGL step equals losses minus pump heads to 1e-6 m`, () => {
+      const parsed = parseProjectFile(readFileSync(`static/examples/${file}`, 'utf8'));
+      if (!parsed.ok) throw new Error(parsed.errors[0].message);
+      const doc = parsed.document;
+      const result = solved(doc);
+      const prof = profile(doc, result, defaultRoute(doc, result)!);
+      const st = prof.stations;
+      expect(st[0].at).toBe('level');
+      expect(st[st.length - 1].at).toBe('level');
+      let total = 0;
+      for (let i = 1; i < st.length; i++) {
+        const drop = predictedDrop(doc, result, st[i - 1], st[i]);
+        expect(
+          Math.abs(st[i - 1].egl - st[i].egl - drop),
+          `${st[i - 1].elementId} → ${st[i].elementId}`,
+        ).toBeLessThan(1e-6);
+        total += drop;
+      }
+      expect(Math.abs(st[0].egl - st[st.length - 1].egl - total)).toBeLessThan(1e-6);
+    });
+  }
 });
