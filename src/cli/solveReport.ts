@@ -6,7 +6,7 @@ import { SCREENING_CAUTION } from '../lib/chart/exportMeta';
 import { nodeLabel } from '../lib/model/labels';
 import type { FittingType, HeadrouteDocument, Id } from '../lib/model/types';
 import { profile } from '../lib/solver/profile';
-import { defaultRoute } from '../lib/solver/route';
+import { defaultRoute, RouteError } from '../lib/solver/route';
 import { lowestVapourMargin, routeFindings, routeName } from '../lib/solver/routeFindings';
 import type {
   ControlValveResult,
@@ -106,7 +106,13 @@ function routeSummary(
 ): { summary: RouteSummary; findings: Finding[] } | null {
   const nodes = defaultRoute(doc, result);
   if (!nodes) return null;
-  const prof = profile(doc, result, nodes);
+  let prof;
+  try {
+    prof = profile(doc, result, nodes);
+  } catch (error) {
+    if (error instanceof RouteError) return null;
+    throw error;
+  }
   const lowest = lowestVapourMargin(prof);
   const last = prof.stations[prof.stations.length - 1];
   return {
