@@ -174,7 +174,10 @@ describe('sheetDrawingSvg', () => {
     for (const id of Object.keys(doc.nodes)) expect(svg).toContain(`data-node="${id}"`);
     for (const id of Object.keys(doc.pipes)) expect(svg).toContain(`data-pipe="${id}"`);
     expect(svg).toContain('Feed &lt;b&gt;tank&lt;/b&gt;');
-    expect(svg).toContain('Suction · ');
+    // Pipes are labelled with name and flow where the label has room (the tables hold all).
+    expect(svg).toMatch(/>P3 · [\d.]+ m3\/h</);
+    expect(svg).not.toContain('Suction · '); // 120 units of pipe: too short for its label
+    expect((svg.match(/<polyline /g) ?? []).length).toBe(Object.keys(doc.pipes).length);
   });
 
   it('draws an empty sheet without failing', () => {
