@@ -50,7 +50,7 @@ export function solve(doc: HeadrouteDocument, caseId?: Id | null): SolveResult {
     base.findings.push(
       findings.invalidInput(
         fluid.liquidName,
-        'its properties cannot be evaluated at the project temperature',
+        'its properties cannot be evaluated at the project temperature, so nothing was solved',
         '',
       ),
     );

@@ -91,7 +91,7 @@ export const findings = {
       [id],
     ),
   invalidInput: (name: string, what: string, id: Id) =>
-    finding('invalid-input', `${q(name)}: ${what}; it is left out of the solve.`, [id]),
+    finding('invalid-input', `${q(name)}: ${what}.`, [id]),
   noConvergence: (iterations: number, residual: number, names: string[], elements: Id[]) =>
     finding(
       'no-convergence',
@@ -184,7 +184,7 @@ export const findings = {
   pumpAtShutoff: (name: string, id: Id) =>
     finding(
       'pump-at-shutoff',
-      `Pump ${q(name)} runs but cannot overcome the head against it: it delivers no flow (its non-return holds).`,
+      `Pump ${q(name)} runs but delivers no flow: the head against it is above its shut-off head, or its line is shut. A pump run dead-headed heats up.`,
       [id],
     ),
   propertyExtrapolated: (liquid: string, properties: string[], temperature: number) =>

@@ -124,7 +124,13 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   const usable = new Set<Id>();
   for (const node of Object.values(doc.nodes)) {
     if (!finite(node.z)) {
-      out.push(findings.invalidInput(node.name, 'its elevation is not a number', node.id));
+      out.push(
+        findings.invalidInput(
+          node.name,
+          'its elevation is not a number; it is left out of the solve',
+          node.id,
+        ),
+      );
       continue;
     }
     switch (node.kind) {
@@ -135,7 +141,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
           out.push(
             findings.invalidInput(
               node.name,
-              'its liquid level or gas pressure is not usable',
+              'its liquid level or gas pressure is not usable; it is left out of the solve',
               node.id,
             ),
           );
@@ -148,7 +154,13 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       case 'boundary': {
         const head = node.z + (node.pressureAbs - fluid.atmosphericPressure) / rhoG;
         if (!finite(head) || !(node.pressureAbs >= 0)) {
-          out.push(findings.invalidInput(node.name, 'its pressure is not usable', node.id));
+          out.push(
+            findings.invalidInput(
+              node.name,
+              'its pressure is not usable; it is left out of the solve',
+              node.id,
+            ),
+          );
           continue;
         }
         portNode.set(portKey(node.id, 'p'), newNode(node.id, head));
@@ -203,16 +215,28 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
         pipe.bore.mode === 'catalogue'
           ? `size ${pipe.bore.nominalSize} schedule ${pipe.bore.schedule} is not in the pipe catalogue`
           : 'its inner diameter is not a positive number';
-      out.push(findings.invalidInput(pipe.name, what, pipe.id));
+      out.push(
+        findings.invalidInput(pipe.name, `${what}; the pipe is left out of the solve`, pipe.id),
+      );
       continue;
     }
     if (!(pipe.length >= 0) || !Number.isFinite(pipe.length)) {
-      out.push(findings.invalidInput(pipe.name, 'its length is not a positive number', pipe.id));
+      out.push(
+        findings.invalidInput(
+          pipe.name,
+          'its length is not a positive number; the pipe is left out of the solve',
+          pipe.id,
+        ),
+      );
       continue;
     }
     if (!(roughness >= 0) || !(roughness / diameter < 1)) {
       out.push(
-        findings.invalidInput(pipe.name, 'its roughness is not usable for its bore', pipe.id),
+        findings.invalidInput(
+          pipe.name,
+          'its roughness is not usable for its bore; the pipe is left out of the solve',
+          pipe.id,
+        ),
       );
       continue;
     }

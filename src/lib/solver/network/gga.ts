@@ -96,6 +96,8 @@ export function gradientSolve(
   const rhs = new Float64Array(nFree);
   const loss = new Float64Array(nLinks);
   const slope = new Float64Array(nLinks);
+  /** Flow at which each law is linearised this iteration (the current flow, or 0 to reopen a non-return). */
+  const point = new Float64Array(nLinks);
 
   graph.links.forEach((link, k) => {
     if (!activeLink[k]) return;
@@ -114,32 +116,45 @@ export function gradientSolve(
       if (!activeLink[k] || law === null) continue;
       const link = graph.links[k];
       const drop = heads[link.from] - heads[link.to];
-      law.refresh(flows[k]);
-      loss[k] = law.headLoss(flows[k]);
+      const q = flows[k];
+      law.refresh(q);
+      loss[k] = law.headLoss(q);
+      slope[k] = law.slope(q);
+      point[k] = q;
       const linkResidual = Math.abs(drop - loss[k]);
-      const stiff = law.slope(flows[k]);
-      if (stiff >= STIFF_SLOPE) {
-        if (!(linkResidual / stiff <= STIFF_FLOW_TOLERANCE)) stiffSettled = false;
+      if (slope[k] >= STIFF_SLOPE) {
+        if (!(linkResidual / slope[k] <= STIFF_FLOW_TOLERANCE)) stiffSettled = false;
       } else residual = Math.max(residual, linkResidual);
-      // A non-return link held shut whose heads now push forward (drop above its loss at zero
-      // flow, e.g. a pump's shut-off head) is linearised on its forward branch at Q = 0;
-      // linearised on the stiff reverse branch it could only creep open by |ΔH|/R per step.
-      if (law.nonReturn && flows[k] < 0 && iteration > 1 && drop > law.headLoss(0)) {
-        flows[k] = 0;
-        law.refresh(0);
-        loss[k] = law.headLoss(0);
-      }
-      if (
+      if (law.nonReturn && q < 0) {
+        const atZero = law.headLoss(0);
+        if (
+          !law.forwardOnly &&
+          iteration > LATCH_AFTER &&
+          q >= -LATCH_FLOW &&
+          drop >= atZero - 1e-6
+        ) {
+          law.forwardOnly = true;
+          loss[k] = law.headLoss(q);
+          slope[k] = law.slope(q);
+        } else if (iteration > 1 && drop > atZero) {
+          // Held shut but the heads now push forward (drop above its loss at zero flow, e.g.
+          // a pump's shut-off head): linearise on the forward branch at Q = 0. On the stiff
+          // reverse branch it could only creep open by |ΔH|/R per step.
+          point[k] = 0;
+          law.refresh(0);
+          loss[k] = atZero;
+          slope[k] = law.slope(0);
+        }
+      } else if (
         law.nonReturn &&
         !law.forwardOnly &&
         iteration > LATCH_AFTER &&
-        Math.abs(flows[k]) <= LATCH_FLOW &&
+        q <= LATCH_FLOW &&
         drop >= law.headLoss(0) - 1e-6
       ) {
         law.forwardOnly = true;
-        loss[k] = law.headLoss(flows[k]);
       }
-      slope[k] = Math.max(law.slope(flows[k]), MIN_SLOPE);
+      slope[k] = Math.max(slope[k], MIN_SLOPE);
     }
     if (!Number.isFinite(residual)) break;
     const tolerance = iteration > LATCH_AFTER ? NOISE_HEAD_TOLERANCE : HEAD_TOLERANCE;
@@ -165,7 +180,7 @@ export function gradientSolve(
       }
       if (link.from === link.to) continue;
       const w = 1 / slope[k];
-      const y = flows[k] - loss[k] * w;
+      const y = point[k] - loss[k] * w;
       if (a >= 0) {
         diagonal[a] += w;
         rhs[a] -= y;
@@ -185,7 +200,7 @@ export function gradientSolve(
     for (let k = 0; k < nLinks; k++) {
       const link = graph.links[k];
       if (!activeLink[k] || link.law === null) continue;
-      flows[k] += (heads[link.from] - heads[link.to] - loss[k]) / slope[k];
+      flows[k] = point[k] + (heads[link.from] - heads[link.to] - loss[k]) / slope[k];
     }
   }
 

@@ -162,6 +162,15 @@ function controlValveLink(valve: ControlValve, pipeIn: number, fluid: SolveFluid
 }
 
 function pumpLink(pump: Pump, pipeIn: number, out: Finding[]): TwoPortLink {
+  if (pump.running && !(pump.ratedSpeed > 0 && Number.isFinite(pump.ratedSpeed))) {
+    out.push(
+      findings.invalidInput(
+        pump.name,
+        'its rated speed is not a positive number, so it is treated as stopped',
+        pump.id,
+      ),
+    );
+  }
   const speedRatio = pump.ratedSpeed > 0 && pump.speed > 0 ? pump.speed / pump.ratedSpeed : 0;
   const running = pump.running && speedRatio > 0 && Number.isFinite(speedRatio);
   const duty = pump.mode === 'duty';
@@ -178,7 +187,13 @@ function pumpLink(pump: Pump, pipeIn: number, out: Finding[]): TwoPortLink {
   if (!running) return { law: new ClosedLaw(), fixedFlow: 0, info };
   if (duty) {
     if (!(pump.dutyFlow >= 0) || !Number.isFinite(pump.dutyFlow)) {
-      out.push(findings.invalidInput(pump.name, 'its duty flow is not a positive number', pump.id));
+      out.push(
+        findings.invalidInput(
+          pump.name,
+          'its duty flow is not a positive number, so it is treated as stopped',
+          pump.id,
+        ),
+      );
       return { law: new ClosedLaw(), fixedFlow: 0, info: { ...info, duty: false } };
     }
     return { law: null, fixedFlow: pump.dutyFlow, info };
