@@ -195,10 +195,15 @@ function chart(g: ProfileGeometry): string {
   );
 
   out.push(`<g data-part="labels" fill="${PROFILE_INK.text}">`);
+  // Leaders first, then the texts over them (each text's halo hides leaders passing behind).
   for (const l of g.labels) {
     out.push(
       `<line x1="${f(l.anchorX)}" x2="${f(l.x)}" y1="${f(bottom + 34)}" y2="${f(l.y - 10)}" stroke="${PROFILE_INK.grid}"/>`,
-      `<text data-element="${escapeXml(l.elementId)}" x="${f(l.x)}" y="${f(l.y)}" text-anchor="middle">${escapeXml(l.text)}</text>`,
+    );
+  }
+  for (const l of g.labels) {
+    out.push(
+      `<text data-element="${escapeXml(l.elementId)}" ${HALO} x="${f(l.x)}" y="${f(l.y)}" text-anchor="middle">${escapeXml(l.text)}</text>`,
     );
   }
   out.push(`</g>`);
