@@ -73,6 +73,14 @@ test('a hot-liquid case on demo 1 becomes the worst NPSH case in the comparison'
     'true',
   );
 
+  // The sheet's findings are those of the case shown: the hot case's NPSH margin is short.
+  const findings = page.getByRole('region', { name: 'Findings' });
+  await expect(findings).toContainText('NPSH available');
+  await panel.getByRole('button', { name: 'Show Base case' }).click();
+  await expect(findings).not.toContainText('NPSH available');
+  await panel.getByRole('button', { name: `Show ${HOT_NAME}` }).click();
+  await expect(findings).toContainText('NPSH available');
+
   await panel.getByRole('button', { name: 'Compare' }).click();
   const table = page.getByRole('table', { name: 'Cases compared' });
   await expect(table).toBeVisible();
