@@ -1,5 +1,18 @@
 /**
  * `solve(document, caseId?)`: flows, heads and pressures over the whole sheet, with findings.
+ *
+ * Conventions (see network/build.ts, network/laws.ts, network/gga.ts):
+ * - Heads are gauge-referenced: HGL = z + p_gauge/ρg, EGL = HGL + v²/2g. The graph's node heads
+ *   are total heads (EGL); a port's HGL is its EGL less the velocity head of the pipe on it, so
+ *   across a reducer the HGL steps by the velocity-head change even with no loss, and at a
+ *   junction of unequal bores the EGL is common (no junction loss unless a tee fitting is drawn).
+ * - Vessels and boundaries are fixed heads of liquid at rest; the entrance/exit K of a vessel
+ *   nozzle (a boundary: 0 and 1) is charged to the pipe on it, chosen by the flow direction.
+ * - Shut valves, stopped pumps, and non-return links (pumps, check valves) against reverse flow
+ *   are a stiff linear resistance (laws.ts CLOSED_RESISTANCE): ≤ 1e-8 m³/s per 100 m of head.
+ * - A pump in duty mode is a flow-controlled link; its result head is the EGL rise the sheet
+ *   asks of it at that flow.
+ * - A control valve follows IEC 60534-2-1 unchoked; flow beyond the choked limit is a finding.
  */
 import type { HeadrouteDocument, Id } from '../model/types';
 import { applyCase } from './applyCase';
