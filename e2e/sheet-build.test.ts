@@ -1,0 +1,103 @@
+import { test, expect, type Page, type Locator } from '@playwright/test';
+import { execFileSync } from 'node:child_process';
+
+test.describe.configure({ retries: 2 });
+
+async function centreOf(locator: Locator) {
+  const b = (await locator.boundingBox())!;
+  return { x: b.x + b.width / 2, y: b.y + b.height / 2 };
+}
+
+async function dragPart(page: Page, part: string, dx: number, dy: number) {
+  const from = await centreOf(page.locator(`[data-part="${part}"]`));
+  const sheet = (await page.locator('svg.sheet').boundingBox())!;
+  await page.mouse.move(from.x, from.y);
+  await page.mouse.down();
+  await page.mouse.move(sheet.x + dx, sheet.y + dy, { steps: 10 });
+  await page.mouse.up();
+}
+
+async function join(page: Page, a: [string, string], b: [string, string]) {
+  const port = (n: string, p: string) =>
+    page.locator(`g.port[data-node="${n}"][data-port="${p}"] .port-hit`);
+  const from = await centreOf(port(...a));
+  const to = await centreOf(port(...b));
+  await page.mouse.move(from.x, from.y);
+  await page.mouse.down();
+  await page.mouse.move(to.x, to.y, { steps: 10 });
+  await page.mouse.up();
+}
+
+async function type(field: Locator, text: string) {
+  await field.fill(text);
+  await field.press('Enter');
+  await expect(field).toHaveAttribute('aria-invalid', 'false');
+}
+
+/** The number in a readout value such as "30.1 m3/h". */
+function number(text: string | null): number {
+  return Number((text ?? '').trim().split(/\s+/)[0]);
+}
+
+test('a route drawn with the mouse solves on screen as the command line solves its file', async ({
+  page,
+}) => {
+  await page.goto('/');
+  await expect(page.locator('g.node')).not.toHaveCount(0, { timeout: 30_000 });
+  await page.getByRole('button', { name: /Project/ }).click();
+  await page.getByRole('menuitem', { name: 'New' }).click();
+  await expect(page.locator('g.node')).toHaveCount(0);
+
+  await dragPart(page, 'vessel-open', 160, 320);
+  await dragPart(page, 'pump', 420, 380);
+  await dragPart(page, 'vessel-open', 740, 260);
+  const ids = await page
+    .locator('g.node')
+    .evaluateAll((els) => els.map((e) => e.getAttribute('data-node-id')!));
+  const [tank, pump, receiver] = ids;
+  await join(page, [tank, 'N1'], [pump, 'suction']);
+  await join(page, [pump, 'discharge'], [receiver, 'N2']);
+  await expect(page.locator('g.pipe')).toHaveCount(2);
+
+  const details = page.getByRole('region', { name: 'Details' });
+  // the receiver stands 8 m up; its liquid level is typed in feet
+  await page.locator(`g.node[data-node-id="${receiver}"] .symbol`).click();
+  await type(details.getByLabel('Bottom elevation'), '8 m');
+  await type(details.getByLabel('Liquid level'), '36 ft');
+  // a long discharge pipe, typed in feet
+  const discharge = page.locator('g.pipe').nth(1);
+  await discharge.locator('.hit').click({ force: true });
+  await type(details.getByLabel('Length', { exact: true }), '150 ft');
+  // nothing selected: project temperature in Fahrenheit
+  await page.locator('svg.sheet').click({ position: { x: 20, y: 20 } });
+  await type(details.getByLabel('Temperature'), '104 F');
+
+  // read the pump's flow and NPSHa from its hover readout
+  await page.locator(`g.node[data-node-id="${pump}"] .symbol`).hover();
+  const readout = page.getByRole('tooltip');
+  await expect(readout).toBeVisible();
+  const value = (label: string) =>
+    readout.locator('dt', { hasText: new RegExp(`^${label}$`) }).locator('+ dd');
+  const shownFlow = number(await value('Flow').textContent());
+  const shownNpsha = number(await value('NPSHa').textContent());
+  await page.screenshot({ path: 'e2e/screenshots/build-route.png' });
+
+  // save and solve the same file with the command line
+  const download = page.waitForEvent('download');
+  await page.keyboard.press('Control+s');
+  const path = await (await download).path();
+  const cli = JSON.parse(
+    execFileSync('node', ['bin/headroute.js', 'solve', path, '--format', 'json'], {
+      encoding: 'utf8',
+    }),
+  );
+  const solved = cli.pumps.find((p: { id: string }) => p.id === pump);
+  expect(cli.converged).toBe(true);
+  // the screen shows three significant figures: agree within half a unit of the last one
+  const flowM3h = solved.flow * 3600;
+  expect(Math.abs(shownFlow - flowM3h)).toBeLessThanOrEqual(0.005 * flowM3h + 1e-9);
+  expect(Math.abs(shownNpsha - solved.npshAvailable)).toBeLessThanOrEqual(
+    0.005 * solved.npshAvailable + 1e-9,
+  );
+  expect(shownFlow).toBeGreaterThan(0);
+});
