@@ -1,0 +1,189 @@
+import { test, expect, type Page, type Download } from '@playwright/test';
+import { mkdirSync, readFileSync } from 'node:fs';
+
+const SHOTS = 'e2e/screenshots';
+mkdirSync(SHOTS, { recursive: true });
+
+const CAUTION = 'Screening result — verify in detailed design';
+
+function panel(page: Page) {
+  return page.getByTestId('profile-panel');
+}
+
+/** The app opens demo 1 (pump over a pipe rack); wait until its profile is drawn. */
+async function openDemo1(page: Page) {
+  await page.goto('/');
+  await expect(panel(page).locator('svg.chart path[data-line="hgl"]')).toHaveAttribute(
+    'd',
+    /^M[\d.]+,[\d.]+L/,
+    { timeout: 20_000 },
+  );
+}
+
+async function downloadText(download: Download): Promise<string> {
+  return readFileSync((await download.path())!, 'utf8');
+}
+
+/** Well-formedness and content of an SVG document, checked by the browser's own XML parser. */
+async function inspectSvg(page: Page, text: string) {
+  return page.evaluate((svg) => {
+    const doc = new DOMParser().parseFromString(svg, 'image/svg+xml');
+    return {
+      errors: doc.getElementsByTagName('parsererror').length,
+      root: doc.documentElement.tagName,
+      lines: [...doc.querySelectorAll('path[data-line]')]
+        .filter((p) => (p.getAttribute('d') ?? '').startsWith('M'))
+        .map((p) => p.getAttribute('data-line')),
+      text: doc.documentElement.textContent ?? '',
+    };
+  }, text);
+}
+
+test('demo 1 shows the profile: grade lines, labels, legend and a readout on hover', async ({
+  page,
+}) => {
+  await openDemo1(page);
+  const chart = panel(page).locator('svg.chart');
+  for (const line of ['pipe', 'hgl', 'egl', 'vapour']) {
+    await expect(chart.locator(`path[data-line="${line}"]`)).toHaveAttribute('d', /^M/);
+  }
+  // The pump's NPSH note and at least one waypoint handle are on the chart.
+  await expect(chart.locator('g.npsh text').first()).toContainText('NPSHa');
+  await expect(chart.locator('[data-waypoint]').first()).toBeVisible();
+  await expect(panel(page).getByRole('list', { name: 'Legend' })).toContainText('Vapour line');
+
+  const box = (await chart.boundingBox())!;
+  await page.mouse.move(box.x + box.width * 0.6, box.y + box.height * 0.45);
+  const readout = panel(page).getByTestId('profile-readout');
+  await expect(readout).toContainText('Chainage');
+  await expect(readout).toContainText('To vapour');
+  await page.screenshot({ path: `${SHOTS}/profile-demo1.png` });
+});
+
+async function openDemoByTitle(page: Page, title: string) {
+  page.on('dialog', (d) => void d.accept());
+  await page.getByRole('button', { name: /Project/ }).click();
+  await page.getByRole('menuitem', { name: title }).click();
+  await expect(page.getByText(`Opened the demo project`)).toBeVisible();
+}
+
+function details(page: Page) {
+  return page.locator('section.details');
+}
+
+async function setTemperature(page: Page, text: string) {
+  const field = details(page).getByLabel('Temperature', { exact: true });
+  await field.fill(text);
+  await field.press('Enter');
+}
+
+test('raising the temperature until the siphon crest flashes marks a stop span there; lowering it clears it', async ({
+  page,
+}) => {
+  await openDemo1(page);
+  await openDemoByTitle(page, 'Siphon over a bund wall');
+  const chart = panel(page).locator('svg.chart');
+  await expect(chart.locator('[data-waypoint="W1"]')).toBeVisible();
+  // 20 °C: the crest is under vacuum (caution) but far above the vapour pressure.
+  await expect(chart.locator('rect[data-span="vacuum"]').first()).toBeVisible();
+  await expect(chart.locator('rect[data-span="vapour"]')).toHaveCount(0);
+
+  // Water boils at about 47 kPa abs near 80 °C (IAPWS-IF97); the crest sits near 40 kPa abs.
+  await setTemperature(page, '85 °C');
+  const stop = chart.locator('rect[data-span="vapour"]');
+  await expect(stop).toHaveCount(1);
+  await expect(chart.locator('text[data-span-label="vapour"]')).toContainText(
+    'Below vapour pressure: min',
+  );
+  // The span covers the crest.
+  const span = (await stop.boundingBox())!;
+  const crest = (await chart.locator('[data-waypoint="W1"]').boundingBox())!;
+  const crestX = crest.x + crest.width / 2;
+  expect(crestX).toBeGreaterThan(span.x);
+  expect(crestX).toBeLessThan(span.x + span.width);
+  await page.screenshot({ path: `${SHOTS}/profile-siphon-85C.png` });
+
+  await setTemperature(page, '20 °C');
+  await expect(stop).toHaveCount(0);
+  await page.screenshot({ path: `${SHOTS}/profile-siphon-20C.png` });
+});
+
+test('a waypoint dragged on the profile changes its elevation in details; one undo restores it', async ({
+  page,
+}) => {
+  await openDemo1(page);
+  const chart = panel(page).locator('svg.chart');
+  const handle = chart.locator('[data-waypoint]').first();
+  const pipeBefore = await chart.locator('path[data-line="pipe"]').getAttribute('d');
+  const box = (await handle.boundingBox())!;
+  const start = { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+  await page.mouse.move(start.x, start.y);
+  await page.mouse.down();
+  await page.mouse.move(start.x, start.y - 15, { steps: 4 });
+  await page.mouse.move(start.x, start.y - 30, { steps: 4 });
+  await page.mouse.up();
+
+  // The drag selects the waypoint: details shows its new, higher elevation.
+  const elevation = details(page).getByLabel('Elevation', { exact: true });
+  await expect(elevation).not.toHaveValue('12 m');
+  const raised = parseFloat(await elevation.inputValue());
+  expect(raised).toBeGreaterThan(12);
+  await expect(chart.locator('path[data-line="pipe"]')).not.toHaveAttribute('d', pipeBefore!);
+  await page.screenshot({ path: `${SHOTS}/profile-waypoint-dragged.png` });
+
+  await page.locator('svg.sheet').click({ position: { x: 5, y: 5 } });
+  await page.keyboard.press('Control+z');
+  await expect(chart.locator('path[data-line="pipe"]')).toHaveAttribute('d', pipeBefore!);
+  await chart.locator('[data-waypoint]').first().focus();
+  await page.keyboard.press('Enter');
+  await expect(details(page).getByLabel('Elevation', { exact: true })).toHaveValue('12 m');
+});
+
+test('exports download: SVG parses with the lines and caution, PNG is 2×, CSV has its header', async ({
+  page,
+}) => {
+  await openDemo1(page);
+  const bar = panel(page);
+
+  const [svgDownload] = await Promise.all([
+    page.waitForEvent('download'),
+    bar.getByRole('button', { name: 'SVG' }).click(),
+  ]);
+  expect(svgDownload.suggestedFilename()).toMatch(/-profile\.svg$/);
+  const svg = await downloadText(svgDownload);
+  const parsed = await inspectSvg(page, svg);
+  expect(parsed.errors).toBe(0);
+  expect(parsed.root).toBe('svg');
+  expect(parsed.lines.sort()).toEqual(['egl', 'hgl', 'pipe', 'vapour']);
+  expect(parsed.text).toContain(CAUTION);
+  expect(parsed.text).toContain('Pump over a pipe rack into a closed receiver');
+  expect(parsed.text).toContain('Route: Storage tank T-101 → Receiver V-201');
+  expect(parsed.text).toContain('Case: Base case');
+  expect(parsed.text).toMatch(/Liquid: Water at 60 °C/);
+  expect(parsed.text).toMatch(/Date: \d{4}-\d{2}-\d{2}/);
+
+  const [pngDownload] = await Promise.all([
+    page.waitForEvent('download'),
+    bar.getByRole('button', { name: 'PNG' }).click(),
+  ]);
+  const png = readFileSync((await pngDownload.path())!);
+  // PNG signature, then the IHDR chunk: width and height as big-endian 32-bit integers.
+  expect(png.subarray(0, 8).toString('hex')).toBe('89504e470d0a1a0a');
+  expect(png.readUInt32BE(16)).toBe(2400);
+  expect(png.readUInt32BE(20)).toBe(1520);
+
+  const [csvDownload] = await Promise.all([
+    page.waitForEvent('download'),
+    bar.getByRole('button', { name: 'CSV' }).click(),
+  ]);
+  const csv = (await downloadText(csvDownload)).split('\n');
+  expect(csv[0]).toBe('# Project: Pump over a pipe rack into a closed receiver');
+  expect(csv.some((l) => l.startsWith('# Screening result'))).toBe(true);
+  const header = csv.find((l) => !l.startsWith('#'))!;
+  expect(header.startsWith('chainage (m),element,at,elevation (m),HGL (m),EGL (m)')).toBe(true);
+
+  // Look at the exported drawing as a person would.
+  await page.setContent(svg.replace(/^<\?xml[^>]*\?>/, ''));
+  await page.setViewportSize({ width: 1200, height: 760 });
+  await page.screenshot({ path: `${SHOTS}/profile-export.png` });
+});
