@@ -120,3 +120,41 @@ describe('random tree networks (property)', () => {
     );
   });
 });
+
+describe('hostile numbers (property)', () => {
+  it('odd but schema-shaped values never throw and never give NaN/Infinity', () => {
+    const odd = fc.constantFrom(0, 1e-9, 1e-3, 1, 1e3, 1e6, -1);
+    fc.assert(
+      fc.property(
+        fc.record({
+          diameter: odd,
+          length: odd,
+          level: fc.double({ min: -50, max: 200, noNaN: true }),
+          speed: fc.constantFrom(0, 1, 1450, 2900, 6000),
+          opening: fc.double({ min: 0, max: 1, noNaN: true }),
+          temperature: fc.double({ min: 250, max: 450, noNaN: true }),
+          gas: fc.constantFrom(1, 1e3, 1e5, 1e7),
+          open: fc.boolean(),
+        }),
+        (v) => {
+          const s = new Sheet();
+          s.vessel('A', v.level, { open: v.open, gasPressureAbs: v.gas });
+          s.pump('P', { speed: v.speed });
+          s.node('control-valve', 'CV', { opening: v.opening });
+          s.vessel('B', 5);
+          s.pipe('S', at('A', 'N1'), at('P', 'suction'), {
+            diameter: v.diameter,
+            length: v.length,
+          });
+          s.pipe('D', at('P', 'discharge'), at('CV', 'in'), { diameter: 0.05, length: v.length });
+          s.pipe('E', at('CV', 'out'), at('B', 'N1'), { diameter: 0.05 });
+          s.doc.settings.temperature = v.temperature;
+          const r = solve(s.doc);
+          expectAllFinite(r);
+          if (!r.converged) expect(r.findings.some((f) => f.level === 'stop')).toBe(true);
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+});
