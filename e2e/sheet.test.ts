@@ -200,3 +200,18 @@ test('box selection, zoom keys and fit keep the sheet usable', async ({ page }) 
   await page.keyboard.press('f');
   await expect(page.locator('.zoom-level')).toHaveText('150%');
 });
+
+test('a finding clicked in the list selects its element on the sheet', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.locator('g.node')).not.toHaveCount(0, { timeout: 30_000 });
+  await page.getByRole('button', { name: /Project/ }).click();
+  await page.getByRole('menuitem', { name: /Siphon/ }).click();
+  await expect(page.getByLabel('Project name')).toHaveValue(/siphon/i);
+  const finding = page.locator('.findings button.finding').first();
+  await expect(finding).toBeVisible();
+  await finding.click();
+  await expect(page.locator('g.node.selected, g.pipe.selected').first()).toBeVisible();
+  // the badge of a finding is drawn on the sheet too
+  await expect(page.locator('svg.sheet .badge').first()).toBeVisible();
+  await page.screenshot({ path: 'e2e/screenshots/sheet-findings.png' });
+});
