@@ -41,7 +41,8 @@ function boreText(pipe: Pipe): string {
 }
 
 function materialText(pipe: Pipe, fmt: Formatter): string {
-  const name = PIPE_MATERIALS[pipe.material]?.name ?? pipe.material;
+  // The material's name up to its first comma ("Carbon steel"); the full name is in the methods.
+  const name = (PIPE_MATERIALS[pipe.material]?.name ?? pipe.material).split(',')[0];
   return pipe.roughness === null ? name : `${name}, ε ${fmt.q(pipe.roughness, 'roughness')}`;
 }
 
@@ -53,8 +54,7 @@ export function pipesTable(doc: HeadrouteDocument, result: SolveResult, fmt: For
       pipe.name || pipe.id,
       `${nodeName(doc, pipe.from.node)} → ${nodeName(doc, pipe.to.node)}`,
       num(fmt.q(pipe.length, 'length')),
-      boreText(pipe),
-      num(fmt.q(r?.innerDiameter, 'diameter')),
+      `${boreText(pipe)}, ${fmt.q(r?.innerDiameter, 'diameter')}`,
       materialText(pipe, fmt),
       num(fmt.q(r?.flow, 'volumeFlow')),
       num(fmt.q(r?.velocity, 'velocity', 3)),
@@ -70,8 +70,7 @@ export function pipesTable(doc: HeadrouteDocument, result: SolveResult, fmt: For
       'Pipe',
       'From → to',
       'Length',
-      'Bore',
-      'Inner dia.',
+      'Bore, inner dia.',
       'Material',
       'Flow',
       'Velocity',
