@@ -17,7 +17,7 @@ const SHAPES: Shape[] = ['series', 'tree', 'grid'];
 /** Timed repeats per size: fewer for the big sheets so the whole run stays within minutes. */
 const REPEATS: Record<number, number> = { 100: 9, 1_000: 5, 10_000: 3, 100_000: 1 };
 /** A size is skipped when the previous size's median predicts a solve slower than this, ms. */
-const PREDICTED_LIMIT_MS = 45_000;
+const PREDICTED_LIMIT_MS = 60_000;
 
 // A handle on the garbage collector, so each row starts from a settled heap.
 setFlagsFromString('--expose-gc');
@@ -31,8 +31,14 @@ function median(values: number[]): number {
   return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
 }
 
+/** A measured size: pipes and a median time, ms. */
+interface Point {
+  pipes: number;
+  ms: number;
+}
+
 /** Least-squares slope of ln(time) against ln(pipes). */
-function exponent(points: Array<{ pipes: number; ms: number }>): number {
+function exponent(points: Point[]): number {
   if (points.length < 2) return NaN;
   const xs = points.map((p) => Math.log(p.pipes));
   const ys = points.map((p) => Math.log(p.ms));
@@ -56,53 +62,28 @@ function fixed(v: number, digits: number): string {
 }
 
 function benchNetworks(): void {
-  const widths = [7, 8, 8, 11, 10, 6, 10, 12, 12, 10];
+  const widths = [7, 8, 8, 11, 10, 11, 6, 10, 10, 12, 10];
   console.log(
     'Network solve (median of the timed repeats; one untimed warm-up below 100,000 pipes)',
   );
   console.log(
-    row(
-      [
-        'shape',
-        'target',
-        'pipes',
-        'median ms',
-        'min ms',
-        'runs',
-        'iterations',
-        'heap Δ MB',
-        'RSS peak MB',
-        'converged',
-      ],
-      widths,
-    ),
+    'wall: elapsed time of solve(); CPU: user + system CPU time of the process over the solve ' +
+      '(less disturbed when the machine is shared).',
   );
+  const head = ['shape', 'target', 'pipes', 'wall ms', 'min wall', 'CPU ms', 'runs'];
+  console.log(row([...head, 'iterations', 'heap Δ MB', 'RSS peak MB', 'converged'], widths));
   const fits: string[] = [];
   for (const shape of SHAPES) {
-    const points: Array<{ pipes: number; ms: number }> = [];
+    const points: Point[] = [];
+    const cpuPoints: Point[] = [];
     for (const size of SIZES) {
       const last = points[points.length - 1];
       if (last) {
         const k = Math.max(1, points.length >= 2 ? exponent(points) : 1);
         const predicted = last.ms * (size / last.pipes) ** k;
         if (predicted > PREDICTED_LIMIT_MS) {
-          console.log(
-            row(
-              [
-                shape,
-                size,
-                '—',
-                `skipped: predicted ${(predicted / 1000).toFixed(0)} s`,
-                '',
-                '',
-                '',
-                '',
-                '',
-                '',
-              ],
-              widths,
-            ),
-          );
+          const why = `skipped: predicted ${(predicted / 1000).toFixed(0)} s`;
+          console.log(row([shape, size, '—', why, '', '', '', '', '', '', ''], widths));
           continue;
         }
       }
@@ -114,12 +95,16 @@ function benchNetworks(): void {
       const base = process.memoryUsage().heapUsed;
       let heapPeak = 0;
       const times: number[] = [];
+      const cpu: number[] = [];
       let iterations = 0;
       let converged = true;
       for (let r = 0; r < repeats; r++) {
+        const c0 = process.cpuUsage();
         const t0 = performance.now();
         const result = solve(doc);
         times.push(performance.now() - t0);
+        const c1 = process.cpuUsage(c0);
+        cpu.push((c1.user + c1.system) / 1000);
         heapPeak = Math.max(heapPeak, process.memoryUsage().heapUsed - base);
         iterations = result.iterations;
         converged &&= result.converged;
@@ -127,31 +112,12 @@ function benchNetworks(): void {
       const rss = process.resourceUsage().maxRSS / 1024;
       const ms = median(times);
       points.push({ pipes, ms });
-      console.log(
-        row(
-          [
-            shape,
-            size,
-            pipes,
-            fixed(ms, 2),
-            fixed(Math.min(...times), 2),
-            repeats,
-            iterations,
-            fixed(heapPeak / MB, 1),
-            fixed(rss, 0),
-            converged ? 'yes' : 'NO',
-          ],
-          widths,
-        ),
-      );
+      cpuPoints.push({ pipes, ms: median(cpu) });
+      const cells = [shape, size, pipes, fixed(ms, 2), fixed(Math.min(...times), 2)];
+      cells.push(fixed(median(cpu), 2), repeats, iterations, fixed(heapPeak / MB, 1));
+      console.log(row([...cells, fixed(rss, 0), converged ? 'yes' : 'NO'], widths));
     }
-    const big = points.filter((p) => p.pipes >= 1000);
-    fits.push(
-      `${shape.padStart(7)}: exponent ${fixed(exponent(points), 2)} over ${points.length} sizes` +
-        (big.length >= 2
-          ? `, ${fixed(exponent(big), 2)} over ${big.length} sizes of ≥ 1,000 pipes`
-          : ''),
-    );
+    fits.push(`${shape.padStart(7)}: wall ${fit(points)}; CPU ${fit(cpuPoints)}`);
   }
   console.log('\nFitted scaling exponent (least squares of ln time against ln pipes; 1 = linear)');
   for (const f of fits) console.log(f);
@@ -159,6 +125,13 @@ function benchNetworks(): void {
     '\nheap Δ: largest heap in use right after a solve, above the settled heap before the row ' +
       '(results plus garbage not yet collected). RSS peak: the process high-water mark so far.',
   );
+}
+
+/** The exponent over all sizes, and over the sizes of 1,000 pipes and more. */
+function fit(points: Point[]): string {
+  const big = points.filter((p) => p.pipes >= 1000);
+  const tail = big.length >= 2 ? ` (${fixed(exponent(big), 2)} from 1,000 pipes up)` : '';
+  return `${fixed(exponent(points), 2)} over ${points.length} sizes${tail}`;
 }
 
 function benchDemos(): void {
