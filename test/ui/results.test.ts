@@ -3,6 +3,7 @@ import type { Finding } from '../../src/lib/solver/types';
 import {
   findingCounts,
   findingsByElement,
+  shownFlow,
   sortFindings,
   worseLevel,
 } from '../../src/lib/ui/results';
@@ -38,5 +39,14 @@ describe('findings for display', () => {
     const list = [f('note', ['a']), f('stop', ['b']), f('caution', ['c']), f('stop', ['d'])];
     expect(sortFindings(list).map((x) => x.elements[0])).toEqual(['b', 'd', 'c', 'a']);
     expect(findingCounts(list)).toEqual({ stop: 2, caution: 1, note: 1 });
+  });
+});
+
+describe('flows for display', () => {
+  it('round-off flows show as no flow; real flows keep their size, sign dropped', () => {
+    expect(shownFlow(3e-15)).toBe(0);
+    expect(shownFlow(-6.5e-11 / 3600)).toBe(0);
+    expect(shownFlow(-0.0083)).toBe(0.0083);
+    expect(shownFlow(1e-6)).toBe(1e-6);
   });
 });

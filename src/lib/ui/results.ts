@@ -8,6 +8,17 @@ import type { Finding, FindingLevel, SolveResult } from '../solver/types';
 import { formatQuantity } from '../units/format';
 import type { UnitSystem } from '../units/quantities';
 
+/**
+ * Flows smaller than this, m³/s (about 0.004 L/h), are solver round-off in a line that carries
+ * nothing; they are shown as no flow rather than as 3e-13 m³/h.
+ */
+export const NO_FLOW = 1e-9;
+
+/** A flow for display: |flow| with round-off below NO_FLOW shown as 0. */
+export function shownFlow(flow: number): number {
+  return Math.abs(flow) < NO_FLOW ? 0 : Math.abs(flow);
+}
+
 const RANK: Record<FindingLevel, number> = { stop: 3, caution: 2, note: 1 };
 
 /** The more severe of two levels. */
@@ -76,8 +87,8 @@ export function readoutLines(
     lines.push(['Length', f(pipe.length, 'length')]);
     const r = result?.pipes[id];
     if (r) {
-      lines.push(['Flow', f(Math.abs(r.flow), 'volumeFlow')]);
-      lines.push(['Velocity', f(Math.abs(r.velocity), 'velocity')]);
+      lines.push(['Flow', f(shownFlow(r.flow), 'volumeFlow')]);
+      lines.push(['Velocity', f(shownFlow(r.flow) === 0 ? 0 : Math.abs(r.velocity), 'velocity')]);
       lines.push(['Inner diameter', f(r.innerDiameter, 'diameter')]);
       lines.push(['Regime', r.regime]);
       lines.push(['Friction loss', f(r.frictionLoss, 'head')]);
@@ -93,12 +104,13 @@ export function readoutLines(
     for (const [port, pr] of Object.entries(nr.ports)) {
       lines.push([`p at ${port}`, f(pr.pressureGauge, 'pressureGauge')]);
     }
-    if (nr.flow !== undefined) lines.push(['Flow', f(Math.abs(nr.flow), 'volumeFlow')]);
+    if (nr.flow !== undefined) lines.push(['Flow', f(shownFlow(nr.flow), 'volumeFlow')]);
     if (nr.headLoss !== undefined && node.kind !== 'pump')
       lines.push(['Head loss', f(nr.headLoss, 'head')]);
   }
   const pr = result?.pumps[id];
   if (pr) {
+    if (nr?.flow === undefined) lines.push(['Flow', f(shownFlow(pr.flow), 'volumeFlow')]);
     lines.push(['Head', f(pr.head, 'head')]);
     lines.push(['NPSHa', f(pr.npshAvailable, 'head')]);
     lines.push(['NPSHr', f(pr.npshRequired, 'head')]);
