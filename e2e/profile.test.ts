@@ -187,3 +187,63 @@ test('exports download: SVG parses with the lines and caution, PNG is 2×, CSV h
   await page.setViewportSize({ width: 1200, height: 760 });
   await page.screenshot({ path: `${SHOTS}/profile-export.png` });
 });
+
+test('selection and hover are shared between the profile and the sheet', async ({ page }) => {
+  await openDemo1(page);
+  const chart = panel(page).locator('svg.chart');
+  const id = (await chart.locator('[data-waypoint]').first().getAttribute('data-waypoint'))!;
+  const onSheet = page.locator(`svg.sheet g.node[data-node-id="${id}"]`);
+
+  await chart.locator(`text.label[data-element="${id}"]`).hover();
+  await expect(onSheet).toHaveClass(/hovered/);
+  await chart.locator(`text.label[data-element="${id}"]`).click();
+  await expect(onSheet).toHaveClass(/selected/);
+  await expect(details(page)).toContainText('Pipe rack high point');
+
+  // And the other way round: a pump picked on the sheet is ringed on the profile.
+  const pump = page.locator('svg.sheet g.node[data-kind="pump"]').first();
+  const pumpId = (await pump.getAttribute('data-node-id'))!;
+  await pump.click();
+  await expect(pump).toHaveClass(/selected/);
+  await expect(chart.locator('circle.node-ring:not(.hovered)')).toHaveCount(1);
+  const ring = (await chart.locator('circle.node-ring:not(.hovered)').boundingBox())!;
+  const label = (await chart.locator(`text.label[data-element="${pumpId}"]`).boundingBox())!;
+  // The ring sits above the pump's label on the chainage axis (labels may shift sideways).
+  expect(Math.abs(ring.x + ring.width / 2 - (label.x + label.width / 2))).toBeLessThan(60);
+  await page.screenshot({ path: `${SHOTS}/profile-shared-selection.png` });
+});
+
+test('routes: a stored route can be chosen, a picked one kept, and zoom runs along chainage', async ({
+  page,
+}) => {
+  await openDemo1(page);
+  await openDemoByTitle(page, 'Branched feed with minimum-flow return');
+  const bar = panel(page);
+  const route = bar.getByLabel('Route', { exact: true });
+  const to = bar.getByLabel('To', { exact: true });
+
+  await route.selectOption({ label: 'T-301 to V-303' });
+  await expect(to.locator('option:checked')).toHaveText('Pressurised receiver V-303');
+  await to.selectOption({ label: 'Head tank V-302' });
+  await expect(route.locator('option:checked')).toHaveText('Picked ends');
+  await expect(bar.locator('svg.chart text.label').last()).toHaveText('Head tank V-302');
+  await bar.getByRole('button', { name: 'Keep route' }).click();
+  await expect(route.locator('option:checked')).toHaveText('Source tank T-301 → Head tank V-302');
+  await expect(route.locator('option')).toHaveCount(4);
+  await route.selectOption({ label: 'T-301 to V-303' });
+  await expect(to.locator('option:checked')).toHaveText('Pressurised receiver V-303');
+
+  // Zoom in with the wheel, then back to the whole route.
+  const chart = bar.locator('svg.chart');
+  const firstTick = () => chart.locator('g.axis text').filter({ hasText: /^\d/ }).allTextContents();
+  const before = await firstTick();
+  const box = (await chart.boundingBox())!;
+  await page.mouse.move(box.x + box.width * 0.7, box.y + box.height * 0.4);
+  await page.mouse.wheel(0, -600);
+  const whole = bar.getByRole('button', { name: 'Whole' });
+  await expect(whole).toBeEnabled();
+  expect(await firstTick()).not.toEqual(before);
+  await page.screenshot({ path: `${SHOTS}/profile-zoomed.png` });
+  await whole.click();
+  await expect(whole).toBeDisabled();
+});
