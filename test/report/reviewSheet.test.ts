@@ -8,6 +8,8 @@ import { escapeHtml } from '../../src/lib/report/html';
 import { sheetDrawingSvg } from '../../src/lib/report/sheetDrawing';
 import { REVIEW_SHEET_CSS } from '../../src/lib/report/printCss';
 import { compareCases } from '../../src/lib/solver/compareCases';
+import { envelopeSpans } from '../../src/lib/chart/envelope';
+import { profile } from '../../src/lib/solver/profile';
 import { solve } from '../../src/lib/solver/solve';
 import { formatQuantity } from '../../src/lib/units';
 import type { HeadrouteDocument } from '../../src/lib/model/types';
@@ -138,6 +140,24 @@ describe('reviewSheetHtml', () => {
     expect(html).toContain('class="num worst"');
     expect(REVIEW_SHEET_CSS).toContain("content: ' ◆ worst'");
     expect(html).toContain('◆ marks the worst value in each row');
+  });
+
+  it('lists the marked spans across all cases per route, naming the worst case', () => {
+    const route = doc.routes.R1.nodes;
+    const cases = [null, 'hot'].map((id) => ({
+      name: id === null ? 'Base case' : doc.cases[id].name,
+      profile: profile(doc, solve(doc, id), route),
+    }));
+    const spans = envelopeSpans(cases);
+    const vapour = spans.find((s) => s.kind === 'vapour');
+    // Water at 95 °C over a 12 m rack crossing: under vapour pressure in the hot case only.
+    expect(vapour?.worstCaseName).toBe('Hot <i>day</i>');
+    expect(html).toContain('<caption>Marked spans across all cases — Feed to day tank</caption>');
+    expect(html).toContain('<th>STOP: below vapour pressure</th><td class="num">');
+    expect(html).toContain(
+      `${formatQuantity(vapour!.start, 'length', 'SI')} – ${formatQuantity(vapour!.end, 'length', 'SI')}`,
+    );
+    expect(html).toContain('<td>Hot &lt;i&gt;day&lt;/i&gt;</td>');
   });
 
   it('can show a case other than the base', () => {

@@ -16,6 +16,7 @@ import { solve } from '../solver/solve';
 import type { Finding, Profile, SolveResult } from '../solver/types';
 import { formatQuantity } from '../units';
 import { comparisonTableHtml } from './comparisonCells';
+import { caseProfiles, envelopeSpansHtml } from './envelopeTable';
 import {
   controlValvesTable,
   fittingsTable,
@@ -204,6 +205,15 @@ export function reviewSheetHtml(doc: HeadrouteDocument, options: ReviewSheetOpti
     return `<figure data-route="${escapeHtml(r.name)}">${inlineSvg(svg, `r${i + 1}`)}<figcaption>${escapeHtml(`Profile ${i + 1}: ${r.name} — ${caseName}`)}</figcaption></figure>`;
   });
 
+  const envelopes =
+    comparison.cases.length > 1
+      ? routes
+          .filter((r) => r.profile)
+          .map((r) =>
+            envelopeSpansHtml(r.name, caseProfiles(doc, comparison, r.profile!.route), system),
+          )
+      : [];
+
   const routeLists = routes
     .filter((r) => r.profile)
     .map((r) => {
@@ -233,7 +243,7 @@ export function reviewSheetHtml(doc: HeadrouteDocument, options: ReviewSheetOpti
       'profiles',
       'Profiles',
       figures.length
-        ? figures.join('\n')
+        ? [...figures, ...envelopes].join('\n')
         : '<p class="empty">No route joins two vessels or boundaries.</p>',
     ),
     sectionHtml(
