@@ -247,3 +247,20 @@ test('routes: a stored route can be chosen, a picked one kept, and zoom runs alo
   await whole.click();
   await expect(whole).toBeDisabled();
 });
+
+test('the profile follows the unit system and reads in the dark theme', async ({ page }) => {
+  await openDemo1(page);
+  const chart = panel(page).locator('svg.chart');
+  await expect(chart.locator('g.axis')).toContainText('Chainage (m)');
+  await page
+    .getByRole('group', { name: 'Unit system' })
+    .getByRole('button', { name: 'US' })
+    .click();
+  await expect(chart.locator('g.axis')).toContainText('Chainage (ft)');
+  await expect(chart.locator('g.npsh')).toContainText('ft');
+  await page.getByRole('button', { name: 'Dark theme' }).click();
+  const box = (await chart.boundingBox())!;
+  await page.mouse.move(box.x + box.width * 0.3, box.y + box.height * 0.4);
+  await expect(panel(page).getByTestId('profile-readout')).toContainText('psi');
+  await page.screenshot({ path: `${SHOTS}/profile-dark-us.png` });
+});
