@@ -157,7 +157,9 @@ test('keyboard only: place a part from the shelf, move it, duplicate and delete 
   await page.keyboard.press('Control+c');
   await page.keyboard.press('Control+v');
   await expect(valve).toHaveCount(1);
-  await page.locator(`g.node[data-node-id="${id}"] .symbol`).click();
+  // ] selects the next part: the only one left
+  await page.keyboard.press(']');
+  await expect(page.locator(`g.node.selected[data-node-id="${id}"]`)).toHaveCount(1);
   await page.keyboard.press('Control+c');
   await page.keyboard.press('Control+v');
   await expect(valve).toHaveCount(2);

@@ -15,8 +15,20 @@ import { GRID, panBy, type SheetPoint } from './viewport';
 export interface SheetKeyContext {
   zoomBy(factor: number): void;
   fit(): void;
-  centre(): SheetPoint;
+  /** Where a paste lands: the pointer if it is over the sheet, else the centre. */
+  pastePoint(): SheetPoint;
   cancelDraft(): boolean;
+  reveal(id: string): void;
+}
+
+/** Select the next (or previous) element in document order: keyboard users pick parts this way. */
+function cycleSelection(step: 1 | -1, ctx: SheetKeyContext): void {
+  const ids = [...Object.keys(editor.doc.nodes), ...Object.keys(editor.doc.pipes)];
+  if (ids.length === 0) return;
+  const current = editor.selection.length > 0 ? ids.indexOf(editor.selection[0]) : -1;
+  const next = ids[(current + step + ids.length) % ids.length];
+  editor.select([next]);
+  ctx.reveal(next);
 }
 
 const ARROWS: Record<string, [number, number]> = {
@@ -48,7 +60,7 @@ export function handleSheetKey(e: KeyboardEvent, ctx: SheetKeyContext): boolean 
         copySelection();
         return true;
       case 'v':
-        pasteAt(ctx.centre());
+        pasteAt(ctx.pastePoint());
         return true;
       case 'd':
         duplicateSelection();
@@ -84,6 +96,12 @@ export function handleSheetKey(e: KeyboardEvent, ctx: SheetKeyContext): boolean 
       return true;
     case 'p':
       editor.tool = editor.tool === 'pipe' ? 'select' : 'pipe';
+      return true;
+    case ']':
+      cycleSelection(1, ctx);
+      return true;
+    case '[':
+      cycleSelection(-1, ctx);
       return true;
     default:
       return false;
