@@ -1,0 +1,173 @@
+/**
+ * Text placed on the profile: marked-span labels above the plot, element labels under the
+ * chainage axis and NPSH notes at pump suctions, each kept clear of its neighbours.
+ */
+import type { Id, NodeKind, SheetNode } from '../model/types';
+import type { PumpResult, Station } from '../solver/types';
+import { formatQuantity, type UnitSystem } from '../units';
+import { estimateTextWidth, placeInLanes } from './labelLanes';
+import type { MarkedSpan } from './markedSpans';
+import type { NodePlace } from './profileMarks';
+import type { ElementLabel, NpshNote, PlacedSpan, ProfileGeometry } from './profileTypes';
+
+/** Line height of label text, as a multiple of the font size. */
+export const LINE_GAP = 1.25;
+
+/** What span placement needs: the x mapping, units, font size, plot and visible chainages. */
+export interface SpanContext {
+  x: (c: number) => number;
+  system: UnitSystem;
+  fontSize: number;
+  plot: ProfileGeometry['plot'];
+  c0: number;
+  c1: number;
+}
+
+/** Short text for a span: what is wrong, the smallest margin and where. */
+export function spanText(span: MarkedSpan, system: UnitSystem): string {
+  const what = span.kind === 'vapour' ? 'Below vapour pressure' : 'Vacuum';
+  const pa = formatQuantity(span.minMarginPa, 'pressureDrop', system, { withUnit: true });
+  const m = formatQuantity(span.minMargin, 'head', system, { withUnit: true });
+  const at = formatQuantity(span.minChainage, 'length', system, { withUnit: true });
+  return `${what}: min ${pa} (${m}) at ${at}`;
+}
+
+/** Marked spans in the visible window, with their labels placed in up to two lanes. */
+export function placeSpans(
+  spans: MarkedSpan[],
+  ctx: SpanContext,
+): Array<Omit<PlacedSpan, 'labelY'> & { lane: number }> {
+  const { x, plot, fontSize } = ctx;
+  const visible = spans.filter((s) => s.end >= ctx.c0 && s.start <= ctx.c1);
+  const texts = visible.map((s) => spanText(s, ctx.system));
+  const lanes = placeInLanes(
+    visible.map((s, i) => ({
+      anchor: (clampX(x(s.start), plot) + clampX(x(s.end), plot)) / 2,
+      width: estimateTextWidth(texts[i], fontSize),
+    })),
+    { min: plot.left, max: plot.left + plot.width },
+    8,
+    2,
+  );
+  return visible.map((s, i) => ({
+    ...s,
+    x0: x(s.start),
+    x1: x(s.end),
+    text: texts[i],
+    labelX: lanes[i].centre,
+    lane: lanes[i].lane,
+  }));
+}
+
+function clampX(px: number, plot: ProfileGeometry['plot']): number {
+  return Math.min(plot.left + plot.width, Math.max(plot.left, px));
+}
+
+/** Which labels win a crowded axis: ends and machines first, then waypoints, then fittings. */
+const LABEL_PRIORITY: Record<NodeKind, number> = {
+  vessel: 0,
+  boundary: 0,
+  pump: 1,
+  'control-valve': 2,
+  waypoint: 3,
+  fitting: 4,
+  junction: 5,
+};
+
+/** Element labels under the axis, by priority; those with no free lane are left out. */
+export function placeLabels(
+  places: NodePlace[],
+  ctx: {
+    nodes?: Record<Id, SheetNode>;
+    fontSize: number;
+    maxLanes: number;
+    x: (c: number) => number;
+    plot: { left: number; width: number };
+  },
+): Array<Omit<ElementLabel, 'y'> & { lane: number }> {
+  const named = places
+    .map((p) => ({ place: p, node: ctx.nodes?.[p.elementId] }))
+    .filter((e): e is { place: NodePlace; node: SheetNode } => e.node !== undefined);
+  const texts = named.map((e) => e.node.name || e.node.id);
+  const lanes = placeInLanes(
+    named.map((e, i) => ({
+      anchor: ctx.x(e.place.chainage),
+      width: estimateTextWidth(texts[i], ctx.fontSize),
+      priority: LABEL_PRIORITY[e.node.kind],
+    })),
+    { min: 0, max: ctx.plot.left + ctx.plot.width + 16 },
+    8,
+    ctx.maxLanes,
+    'drop',
+  );
+  const out: Array<Omit<ElementLabel, 'y'> & { lane: number }> = [];
+  named.forEach((e, i) => {
+    const lane = lanes[i];
+    if (!lane) return;
+    out.push({
+      elementId: e.place.elementId,
+      kind: e.node.kind,
+      text: texts[i],
+      chainage: e.place.chainage,
+      anchorX: ctx.x(e.place.chainage),
+      x: lane.centre,
+      lane: lane.lane,
+    });
+  });
+  return out;
+}
+
+/** NPSHa and NPSHr notes at the suction of each pump in view. */
+export function npshNotes(
+  line: readonly Station[],
+  pumps: Record<Id, PumpResult> | undefined,
+  ctx: {
+    x: (c: number) => number;
+    y: (h: number) => number;
+    system: UnitSystem;
+    fontSize: number;
+    plot: ProfileGeometry['plot'];
+    inWindow: (c: number) => boolean;
+  },
+): NpshNote[] {
+  if (!pumps) return [];
+  const suctions = line.filter(
+    (s) => s.at === 'node-in' && pumps[s.elementId] && ctx.inWindow(s.chainage),
+  );
+  const head = (v: number) => formatQuantity(v, 'head', ctx.system, { withUnit: true });
+  const notes = suctions.map((s) => {
+    const p = pumps[s.elementId];
+    const lines: [string, string] = [
+      `NPSHa ${head(p.npshAvailable)}`,
+      `NPSHr ${head(p.npshRequired)}`,
+    ];
+    return { s, p, lines, width: estimateTextWidth(lines[0], ctx.fontSize) };
+  });
+  const lanes = placeInLanes(
+    notes.map((n) => {
+      // Left of the suction when there is room, else right of it (clear of the pump's step).
+      const sx = ctx.x(n.s.chainage);
+      const leftRoom = sx - n.width - 6 >= ctx.plot.left + 2;
+      return { anchor: leftRoom ? sx - n.width / 2 - 6 : sx + n.width / 2 + 6, width: n.width };
+    }),
+    { min: ctx.plot.left + 2, max: ctx.plot.left + ctx.plot.width - 2 },
+    6,
+    3,
+  );
+  const lineHeight = ctx.fontSize * LINE_GAP;
+  return notes.map((n, i) => {
+    const anchorY = ctx.y(Number.isFinite(n.s.hgl) ? n.s.hgl : n.s.elevation);
+    // Below both the HGL and the pipe at the suction, where the chart is usually clear.
+    const below = Math.max(anchorY, ctx.y(n.s.elevation));
+    const top = Math.max(ctx.plot.top + lineHeight, below + 16 + lanes[i].lane * 2 * lineHeight);
+    return {
+      elementId: n.s.elementId,
+      anchorX: ctx.x(n.s.chainage),
+      anchorY,
+      x: lanes[i].left,
+      y: Math.min(top, ctx.plot.top + ctx.plot.height - lineHeight - 2),
+      lines: n.lines,
+      short: n.p.npshAvailable < n.p.npshRequired,
+    };
+  });
+}
