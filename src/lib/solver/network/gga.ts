@@ -204,8 +204,9 @@ export function gradientSolve(
     }
   }
 
+  // Only a no-convergence finding names the worst links; a converged solve skips the pass.
   const worst: Array<[number, number]> = [];
-  for (let k = 0; k < nLinks; k++) {
+  for (let k = 0; k < nLinks && !converged; k++) {
     const link = graph.links[k];
     if (!activeLink[k] || link.law === null || link.law.slope(flows[k]) >= STIFF_SLOPE) continue;
     const r = Math.abs(heads[link.from] - heads[link.to] - link.law.headLoss(flows[k]));

@@ -10,9 +10,10 @@
  */
 import { ISA_STANDARD_GRAVITY } from '../../physics/atmosphere';
 import {
-  darcyFrictionFactor,
+  colebrookWhite,
   LAMINAR_LIMIT_REYNOLDS,
   reynoldsNumber,
+  TURBULENT_LIMIT_REYNOLDS,
 } from '../../physics/friction';
 
 /** Standard gravity, m/s² (ISO 2533 / CGPM 1901). */
@@ -118,12 +119,8 @@ export class PipeLaw implements LinkLaw {
 
   /** Friction head loss, m, signed like the flow. */
   friction(flow: number): number {
-    if (this.length === 0 || flow === 0) return 0;
-    const re = this.reynolds(flow);
-    if (re <= LAMINAR_LIMIT_REYNOLDS) return this.laminarSlope * flow;
-    const f = darcyFrictionFactor(re, this.relativeRoughness).factor;
-    const v = flow / this.area;
-    return (f * (this.length / this.diameter) * v * Math.abs(v)) / (2 * GRAVITY);
+    this.evaluateFriction(flow);
+    return this.memoLoss;
   }
 
   /** Entrance/exit loss at vessel or boundary ends, m, signed like the flow. */
@@ -140,12 +137,70 @@ export class PipeLaw implements LinkLaw {
   slope(flow: number): number {
     const k = flow >= 0 ? this.kForward : this.kReverse;
     const endSlope = (2 * k * Math.abs(flow)) / (2 * GRAVITY * this.area * this.area);
-    if (this.length === 0) return endSlope;
-    if (this.reynolds(flow) <= LAMINAR_LIMIT_REYNOLDS) return this.laminarSlope + endSlope;
-    // Central difference: f varies with Re, so d(h_f)/dQ is not simply 2 h_f/Q.
-    const step = Math.abs(flow) * 1e-6;
-    const frictionSlope = (this.friction(flow + step) - this.friction(flow - step)) / (2 * step);
-    return frictionSlope + endSlope;
+    this.evaluateFriction(flow);
+    return this.memoSlope + endSlope;
+  }
+
+  /** Flow of the last friction evaluation (NaN before the first), and its loss and slope. */
+  private memoFlow = NaN;
+  private memoLoss = 0;
+  private memoSlope = 0;
+  /** Colebrook–White f at Re = 4000 for this pipe, the upper end of the transition (lazy). */
+  private turbulentAtLimit = NaN;
+
+  /**
+   * Friction loss h_f and its slope d(h_f)/dQ at this flow, kept for the next call at the same
+   * flow: the iteration asks for the loss and the slope of every pipe at one flow, and the
+   * results ask for the loss again, so the friction factor is found once per pipe per iteration.
+   *
+   * With v = Q/A and Re = ρ|v|D/μ, h_f = f(Re)(L/D)v|v|/2g gives
+   *   d(h_f)/dQ = (L/D)/(2g) · (|v|/A) · (Re·df/dRe + 2f).
+   * df/dRe in turbulent flow follows from Colebrook–White by implicit differentiation: with
+   * x = 1/√f, a = (ε/D)/3.7, b = 2.51/Re, s = a + b x and G(x, Re) = x + 2 log10(s) = 0,
+   *   dx/dRe = (2 b x /(ln10 · s · Re)) / (1 + 2b/(ln10 · s)),  df/dRe = −2 x⁻³ dx/dRe.
+   * In the transition (linear in Re, physics/friction.ts) df/dRe is the interpolation's slope.
+   */
+  private evaluateFriction(flow: number): void {
+    if (flow === this.memoFlow) return;
+    this.memoFlow = flow;
+    if (this.length === 0) {
+      this.memoLoss = 0;
+      this.memoSlope = 0;
+      return;
+    }
+    if (flow === 0) {
+      this.memoLoss = 0;
+      this.memoSlope = this.laminarSlope;
+      return;
+    }
+    const re = this.reynolds(flow);
+    if (re <= LAMINAR_LIMIT_REYNOLDS) {
+      this.memoLoss = this.laminarSlope * flow;
+      this.memoSlope = this.laminarSlope;
+      return;
+    }
+    let f: number;
+    let dfdRe: number;
+    if (re < TURBULENT_LIMIT_REYNOLDS) {
+      if (Number.isNaN(this.turbulentAtLimit))
+        this.turbulentAtLimit = colebrookWhite(TURBULENT_LIMIT_REYNOLDS, this.relativeRoughness);
+      const laminar = 64 / LAMINAR_LIMIT_REYNOLDS;
+      dfdRe =
+        (this.turbulentAtLimit - laminar) / (TURBULENT_LIMIT_REYNOLDS - LAMINAR_LIMIT_REYNOLDS);
+      f = laminar + (re - LAMINAR_LIMIT_REYNOLDS) * dfdRe;
+    } else {
+      f = colebrookWhite(re, this.relativeRoughness);
+      const x = 1 / Math.sqrt(f);
+      const b = 2.51 / re;
+      const s = this.relativeRoughness / 3.7 + b * x;
+      const dxdRe = (2 * b * x) / (Math.LN10 * s * re) / (1 + (2 * b) / (Math.LN10 * s));
+      dfdRe = (-2 * dxdRe) / (x * x * x);
+    }
+    const v = flow / this.area;
+    const speed = Math.abs(v);
+    const lOverD2g = this.length / this.diameter / (2 * GRAVITY);
+    this.memoLoss = f * lOverD2g * v * speed;
+    this.memoSlope = lOverD2g * (speed / this.area) * (re * dfdRe + 2 * f);
   }
 }
 
