@@ -137,6 +137,15 @@ test('a waypoint dragged on the profile changes its elevation in details; one un
   await chart.locator('[data-waypoint]').first().focus();
   await page.keyboard.press('Enter');
   await expect(details(page).getByLabel('Elevation', { exact: true })).toHaveValue('12 m');
+
+  // From the keyboard: the arrow keys move the focused waypoint by 0.1 m, one undo step each.
+  await page.keyboard.press('ArrowUp');
+  await expect(details(page).getByLabel('Elevation', { exact: true })).toHaveValue('12.1 m');
+  await page.locator('svg.sheet').click({ position: { x: 5, y: 5 } });
+  await page.keyboard.press('Control+z');
+  await chart.locator('[data-waypoint]').first().focus();
+  await page.keyboard.press('Enter');
+  await expect(details(page).getByLabel('Elevation', { exact: true })).toHaveValue('12 m');
 });
 
 test('exports download: SVG parses with the lines and caution, PNG is 2×, CSV has its header', async ({
