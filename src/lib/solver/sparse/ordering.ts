@@ -83,24 +83,35 @@ class DegreeHeap {
 /**
  * Minimum-degree ordering of the graph on `n` nodes with the given undirected edges
  * (self-loops and repeated edges are ignored), returning the factor's sparsity pattern.
+ *
+ * The elimination graph is kept as a quotient graph (George and Liu, 1989, "The evolution of
+ * the minimum degree ordering algorithm", SIAM Review 31(1)): an eliminated node becomes an
+ * "element" holding the list of its remaining neighbours (the clique it leaves behind) instead
+ * of adding that clique's edges to every neighbour; elements next to the eliminated node are
+ * absorbed into the new one. A node's degree is the exact size of the union of its remaining
+ * neighbours and its elements' lists, so the order (least degree first, ties to the lower
+ * index) and the fill are those of the explicit elimination graph.
  */
 export function minimumDegreeOrder(
   n: number,
   edgeA: ArrayLike<number>,
   edgeB: ArrayLike<number>,
 ): EliminationOrder {
-  const adjacency: Array<Set<number>> = Array.from({ length: n }, () => new Set<number>());
-  for (let e = 0; e < edgeA.length; e++) {
-    const a = edgeA[e];
-    const b = edgeB[e];
-    if (a === b) continue;
-    adjacency[a].add(b);
-    adjacency[b].add(a);
-  }
-  const heap = new DegreeHeap();
-  for (let i = 0; i < n; i++) heap.push(adjacency[i].size, i);
-
+  const variables = distinctNeighbours(n, edgeA, edgeB);
+  const elementsOf: number[][] = Array.from({ length: n }, () => []);
+  /** elementVariables[e]: the live nodes next to element e (the eliminated node e). */
+  const elementVariables: number[][] = new Array<number[]>(n);
   const eliminated = new Uint8Array(n);
+  const absorbed = new Uint8Array(n);
+  const degree = new Int32Array(n);
+  const mark = new Int32Array(n);
+  let stamp = 0;
+  const heap = new DegreeHeap();
+  for (let i = 0; i < n; i++) {
+    degree[i] = variables[i].length;
+    heap.push(degree[i], i);
+  }
+
   const perm = new Int32Array(n);
   const inverse = new Int32Array(n);
   const columns: number[][] = [];
@@ -109,29 +120,104 @@ export function minimumDegreeOrder(
     const entry = heap.pop();
     if (entry === null) break;
     const v = entry.node;
-    if (eliminated[v] || entry.key !== adjacency[v].size) continue; // stale heap entry
+    if (eliminated[v] || entry.key !== degree[v]) continue; // stale heap entry
     eliminated[v] = 1;
     perm[step] = v;
     inverse[v] = step;
     step++;
-    const neighbours = Array.from(adjacency[v]);
-    columns.push(neighbours);
-    // The neighbours of v form a clique once v is eliminated (the fill).
-    for (const u of neighbours) {
-      const set = adjacency[u];
-      set.delete(v);
-      for (const w of neighbours) if (w !== u) set.add(w);
+
+    // The new element's list: v's live neighbours and the lists of v's elements (absorbed).
+    const list: number[] = [];
+    mark[v] = ++stamp;
+    for (const u of variables[v]) {
+      if (eliminated[u] || mark[u] === stamp) continue;
+      mark[u] = stamp;
+      list.push(u);
     }
-    for (const u of neighbours) heap.push(adjacency[u].size, u);
-    adjacency[v].clear();
+    for (const e of elementsOf[v]) {
+      if (absorbed[e]) continue;
+      for (const u of elementVariables[e]) {
+        if (eliminated[u] || mark[u] === stamp) continue;
+        mark[u] = stamp;
+        list.push(u);
+      }
+      absorbed[e] = 1;
+      elementVariables[e] = [];
+    }
+    elementVariables[v] = list;
+    columns.push(list);
+    variables[v] = [];
+    elementsOf[v] = [];
+
+    // Each neighbour drops absorbed elements and the neighbours now reached through v.
+    const listed = stamp;
+    for (const u of list) {
+      const elements = elementsOf[u];
+      let kept = 0;
+      for (const e of elements) if (!absorbed[e]) elements[kept++] = e;
+      elements.length = kept;
+      elements.push(v);
+      const neighbours = variables[u];
+      kept = 0;
+      for (const w of neighbours) if (!eliminated[w] && mark[w] !== listed) neighbours[kept++] = w;
+      neighbours.length = kept;
+    }
+    for (const u of list) {
+      mark[u] = ++stamp;
+      let d = 0;
+      for (const w of variables[u]) {
+        if (mark[w] === stamp) continue;
+        mark[w] = stamp;
+        d++;
+      }
+      for (const e of elementsOf[u]) {
+        for (const w of elementVariables[e]) {
+          if (mark[w] === stamp) continue;
+          mark[w] = stamp;
+          d++;
+        }
+      }
+      degree[u] = d;
+      heap.push(d, u);
+    }
   }
 
   const columnStart = new Int32Array(n + 1);
   for (let j = 0; j < n; j++) columnStart[j + 1] = columnStart[j] + columns[j].length;
   const rows = new Int32Array(columnStart[n]);
   for (let j = 0; j < n; j++) {
-    const mapped = columns[j].map((node) => inverse[node]).sort((x, y) => x - y);
-    rows.set(mapped, columnStart[j]);
+    const column = columns[j];
+    const start = columnStart[j];
+    for (let p = 0; p < column.length; p++) rows[start + p] = inverse[column[p]];
+    rows.subarray(start, start + column.length).sort();
   }
   return { perm, inverse, columnStart, rows };
+}
+
+/** Each node's distinct neighbours (self-loops and repeated edges dropped). */
+function distinctNeighbours(
+  n: number,
+  edgeA: ArrayLike<number>,
+  edgeB: ArrayLike<number>,
+): number[][] {
+  const lists: number[][] = Array.from({ length: n }, () => []);
+  for (let e = 0; e < edgeA.length; e++) {
+    const a = edgeA[e];
+    const b = edgeB[e];
+    if (a === b) continue;
+    lists[a].push(b);
+    lists[b].push(a);
+  }
+  const seen = new Int32Array(n).fill(-1);
+  for (let i = 0; i < n; i++) {
+    const list = lists[i];
+    let kept = 0;
+    for (const w of list) {
+      if (seen[w] === i) continue;
+      seen[w] = i;
+      list[kept++] = w;
+    }
+    list.length = kept;
+  }
+  return lists;
 }
