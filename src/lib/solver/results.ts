@@ -17,6 +17,13 @@ import type { ControlValveResult, NodeResult, PipeResult, PortResult, PumpResult
 /** Velocity below which a pipe is reported as carrying no flow, m/s. */
 export const NO_FLOW_VELOCITY = 1e-4;
 
+/**
+ * Least pump efficiency used in the results, 0.01: a fitted curve extrapolated far beyond its
+ * points can give zero or negative efficiency, which would make the shaft power infinite or
+ * negative. A floor of 1 % keeps it finite; no real centrifugal pump in service runs that low.
+ */
+export const EFFICIENCY_FLOOR = 0.01;
+
 /** Results keyed by element id. */
 export interface ElementResults {
   pipes: Record<Id, PipeResult>;
@@ -198,9 +205,12 @@ function pumpResult(
     info.running && info.npshrFit.form !== 'empty'
       ? Math.max(pumpNpshRequired(info.npshrFit, q, s), 0)
       : 0;
+  // Far beyond its points a fitted efficiency curve can fall to zero or below; the efficiency is
+  // held at EFFICIENCY_FLOOR there so the shaft power stays finite and positive (the pump is
+  // then far from its best-efficiency flow and gets a pump-off-bep finding).
   const efficiency =
     info.running && info.efficiencyFit.form !== 'empty'
-      ? clean(pumpEfficiency(info.efficiencyFit, q, s))
+      ? Math.max(clean(pumpEfficiency(info.efficiencyFit, q, s)), EFFICIENCY_FLOOR)
       : 0;
   const power = efficiency > 0 ? shaftPower(fluid.density, q, head, efficiency) : 0;
   const bep = info.running ? bestEfficiencyFlow(info.efficiencyFit, s) : null;
