@@ -11,7 +11,7 @@
  * definite). After the first iteration every flow set satisfies continuity at every node to
  * the precision of the linear solve, whatever the head residual.
  */
-import { SparseLdl } from '../sparse/ldl';
+import { sparseLdlFor } from '../sparse/ldl';
 import type { HydraulicGraph } from './build';
 
 /** Smallest link slope used in the matrix, s/m² (a lossless link at zero flow). */
@@ -90,7 +90,7 @@ export function gradientSolve(
       edgeLink.push(k);
     }
   });
-  const ldl = new SparseLdl(nFree, edgeA, edgeB);
+  const ldl = sparseLdlFor(nFree, edgeA, edgeB);
   const diagonal = new Float64Array(nFree);
   const offDiagonal = new Float64Array(edgeA.length);
   const rhs = new Float64Array(nFree);

@@ -10,6 +10,41 @@
  */
 import { minimumDegreeOrder, type EliminationOrder } from './ordering';
 
+/** Patterns kept for reuse across solves (most recent last). */
+const PATTERN_CACHE_SIZE = 4;
+const patternCache: Array<{ a: Int32Array; b: Int32Array; ldl: SparseLdl }> = [];
+
+function samePattern(x: Int32Array, y: ArrayLike<number>): boolean {
+  if (x.length !== y.length) return false;
+  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return false;
+  return true;
+}
+
+/**
+ * A factoriser for this pattern, reusing the ordering and symbolic factorisation of an earlier
+ * call with the same size and edge lists (the last few patterns are kept). Re-solving a sheet
+ * whose connections did not change (a value edited, another case) skips the ordering; the
+ * numbers are the same as with a new `SparseLdl`, since `factor` overwrites all numeric state.
+ */
+export function sparseLdlFor(
+  size: number,
+  edgeA: ArrayLike<number>,
+  edgeB: ArrayLike<number>,
+): SparseLdl {
+  for (let i = patternCache.length - 1; i >= 0; i--) {
+    const entry = patternCache[i];
+    if (entry.ldl.size === size && samePattern(entry.a, edgeA) && samePattern(entry.b, edgeB)) {
+      patternCache.splice(i, 1);
+      patternCache.push(entry);
+      return entry.ldl;
+    }
+  }
+  const ldl = new SparseLdl(size, edgeA, edgeB);
+  patternCache.push({ a: Int32Array.from(edgeA), b: Int32Array.from(edgeB), ldl });
+  if (patternCache.length > PATTERN_CACHE_SIZE) patternCache.shift();
+  return ldl;
+}
+
 /** A symmetric sparse matrix pattern (diagonal plus the given off-diagonal pairs), factorised numerically on demand. */
 export class SparseLdl {
   /** Number of unknowns. */
@@ -96,7 +131,10 @@ export class SparseLdl {
         for (let q = p + 1; q < columnStart[k + 1]; q++) x[rows[q]] -= values[q] * t;
         next[k] = p + 1;
       }
-      if (!(d > 0) || !Number.isFinite(d)) return false;
+      if (!(d > 0) || !Number.isFinite(d)) {
+        for (let p = start; p < end; p++) x[rows[p]] = 0; // leave the work vector clean for reuse
+        return false;
+      }
       pivots[j] = d;
       for (let p = start; p < end; p++) {
         const row = rows[p];
