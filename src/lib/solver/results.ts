@@ -110,10 +110,16 @@ export function elementResults(
     const graphNode = graph.portNode.get(key);
     const attached = graph.portPipes.get(key) ?? [];
     // The pipe carrying the most flow sets the port's velocity (a port normally has one pipe).
+    // Flows equal to rounding (a junction joining two pipes in series) keep the first pipe, so
+    // the choice does not hang on the last bit of the iteration.
     let best: GraphPipe | null = null;
     for (const gp of attached) {
-      if (best === null || Math.abs(pipes[gp.pipe.id].flow) > Math.abs(pipes[best.pipe.id].flow))
-        best = gp;
+      if (best === null) best = gp;
+      else {
+        const q = Math.abs(pipes[gp.pipe.id].flow);
+        const qBest = Math.abs(pipes[best.pipe.id].flow);
+        if (q - qBest > 1e-9 * qBest + 1e-15) best = gp;
+      }
     }
     let total = graphNode === undefined ? 0 : heads[graphNode];
     let velocity = 0;

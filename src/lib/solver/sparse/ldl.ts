@@ -24,7 +24,8 @@ function samePattern(x: Int32Array, y: ArrayLike<number>): boolean {
  * A factoriser for this pattern, reusing the ordering and symbolic factorisation of an earlier
  * call with the same size and edge lists (the last few patterns are kept). Re-solving a sheet
  * whose connections did not change (a value edited, another case) skips the ordering; the
- * numbers are the same as with a new `SparseLdl`, since `factor` overwrites all numeric state.
+ * numbers are the same as with a new `SparseLdl`: each column of `factor` loads its entries
+ * before use, so no state of an earlier factorisation is read.
  */
 export function sparseLdlFor(
   size: number,
@@ -132,7 +133,8 @@ export class SparseLdl {
         next[k] = p + 1;
       }
       if (!(d > 0) || !Number.isFinite(d)) {
-        for (let p = start; p < end; p++) x[rows[p]] = 0; // leave the work vector clean for reuse
+        // Each column loads its own entries before use, so this only keeps the state tidy.
+        for (let p = start; p < end; p++) x[rows[p]] = 0;
         return false;
       }
       pivots[j] = d;
