@@ -6,7 +6,7 @@
 import type { HeadrouteDocument, Id, SheetNode } from '../model/types';
 import { portsOf, portElevation } from '../model/ports';
 import { chokedPressureDrop } from '../physics/controlValve';
-import { darcyFrictionFactor, LAMINAR_LIMIT_REYNOLDS } from '../physics/friction';
+import { LAMINAR_LIMIT_REYNOLDS } from '../physics/friction';
 import { bestEfficiencyFlow, pumpEfficiency, pumpNpshRequired, shaftPower } from '../physics/pump';
 import type { SolveFluid } from './fluid';
 import { portKey, type GraphPipe, type HydraulicGraph } from './network/build';
@@ -78,7 +78,7 @@ export function elementResults(
     const v = q / law.area;
     const re = law.reynolds(q);
     const noFlow = Math.abs(v) < NO_FLOW_VELOCITY;
-    const friction = re > 0 ? darcyFrictionFactor(re, law.relativeRoughness) : null;
+    const friction = re > 0 ? law.frictionFactor(q) : null;
     const vh = (v * v) / g2;
     const totalFrom = active ? endTotalHead(gp, 'from') : 0;
     const totalTo = active ? endTotalHead(gp, 'to') : 0;
@@ -144,7 +144,7 @@ export function elementResults(
   const nodes: Record<Id, NodeResult> = {};
   const pumps: Record<Id, PumpResult> = {};
   const controlValves: Record<Id, ControlValveResult> = {};
-  for (const node of Object.values(doc.nodes)) {
+  for (const node of graph.sheetNodes) {
     if (!graph.portNode.has(portKey(node.id, portsOf(node)[0] ?? ''))) {
       if (node.kind !== 'vessel' || node.nozzles.length > 0) continue;
     }

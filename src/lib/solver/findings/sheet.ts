@@ -36,7 +36,7 @@ export function sheetFindings(
   }
 
   // Nodes: lowest port pressure against vapour pressure; a closed vessel's gas space too.
-  for (const node of Object.values(doc.nodes)) {
+  for (const node of graph.sheetNodes) {
     const result = results.nodes[node.id];
     if (!result) continue;
     let lowest: { p: number; port: string } | null = null;

@@ -13,8 +13,8 @@
  *   starts with that total head (no entrance loss), liquid delivered into it keeps that
  *   pressure at the pipe end (its velocity head is lost, exit K = 1).
  */
-import type { HeadrouteDocument, Id, Pipe, PortRef, SheetNode } from '../../model/types';
-import { hasPort, portElevation } from '../../model/ports';
+import type { HeadrouteDocument, Id, Pipe, SheetNode } from '../../model/types';
+import { hasPort } from '../../model/ports';
 import { findPipeMaterial, DEFAULT_MATERIAL, PIPE_MATERIALS } from '../../physics/materials';
 import { catalogueInnerDiameter } from '../../physics/pipeCatalogue';
 import type { Finding } from '../types';
@@ -65,6 +65,8 @@ export interface HydraulicGraph {
   nodeLink: Map<Id, number>;
   /** Sheet elements touching each graph node (for naming cut-off parts). */
   nodeElements: Id[][];
+  /** The document's sheet nodes in document order (Object.values once per solve). */
+  sheetNodes: SheetNode[];
   findings: Finding[];
 }
 
@@ -100,6 +102,12 @@ function endCoefficients(node: SheetNode, port: string): { entrance: number; exi
   return null;
 }
 
+/** Elevation of an existing port: a vessel nozzle's own elevation, otherwise the node's z. */
+function elevationOf(node: SheetNode, port: string): number {
+  if (node.kind === 'vessel') return node.nozzles.find((n) => n.id === port)!.z;
+  return node.z;
+}
+
 function finite(...values: number[]): boolean {
   return values.every((v) => Number.isFinite(v));
 }
@@ -122,7 +130,8 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   };
 
   const usable = new Set<Id>();
-  for (const node of Object.values(doc.nodes)) {
+  const sheetNodes = Object.values(doc.nodes);
+  for (const node of sheetNodes) {
     if (!finite(node.z)) {
       out.push(
         findings.invalidInput(
@@ -193,13 +202,13 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   const portPipes = new Map<string, GraphPipe[]>();
   const boreCache = new Map<string, number | undefined>();
   for (const pipe of Object.values(doc.pipes)) {
-    const ends: Array<[PortRef, 'from' | 'to']> = [
-      [pipe.from, 'from'],
-      [pipe.to, 'to'],
-    ];
+    const fromNode = getNode(doc, pipe.from.node);
+    const toNode = getNode(doc, pipe.to.node);
     let broken = false;
-    for (const [ref, end] of ends) {
-      const node = getNode(doc, ref.node);
+    for (const [node, ref, end] of [
+      [fromNode, pipe.from, 'from'],
+      [toNode, pipe.to, 'to'],
+    ] as const) {
       if (!node || !hasPort(node, ref.port)) {
         out.push(
           findings.brokenConnection(pipe.name, end, node?.name ?? ref.node, ref.port, pipe.id),
@@ -207,7 +216,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
         broken = true;
       } else if (!usable.has(node.id)) broken = true;
     }
-    if (broken) continue;
+    if (broken || !fromNode || !toNode) continue;
     const diameter = pipeDiameter(pipe, boreCache);
     const roughness = pipeRoughness(pipe);
     if (diameter === undefined || !(diameter > 0) || !Number.isFinite(diameter)) {
@@ -240,28 +249,28 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       );
       continue;
     }
-    const fromNode = getNode(doc, pipe.from.node)!;
-    const toNode = getNode(doc, pipe.to.node)!;
     const fromEnd = endCoefficients(fromNode, pipe.from.port);
     const toEnd = endCoefficients(toNode, pipe.to.port);
     // Forward flow leaves at `from` (entrance) and arrives at `to` (exit); reverse the other way.
     const kForward = (fromEnd?.entrance ?? 0) + (toEnd?.exit ?? 0);
     const kReverse = (fromEnd?.exit ?? 0) + (toEnd?.entrance ?? 0);
     const law = new PipeLaw(diameter, pipe.length, roughness / diameter, fluid, kForward, kReverse);
-    const from = portNode.get(portKey(pipe.from.node, pipe.from.port))!;
-    const to = portNode.get(portKey(pipe.to.node, pipe.to.port))!;
+    const fromKey = portKey(pipe.from.node, pipe.from.port);
+    const toKey = portKey(pipe.to.node, pipe.to.port);
+    const from = portNode.get(fromKey)!;
+    const to = portNode.get(toKey)!;
     const link = links.length;
     links.push({ element: pipe.id, kind: 'pipe', from, to, law, fixedFlow: 0, info: null });
     const graphPipe: GraphPipe = {
       pipe,
       link,
       law,
-      elevationFrom: portElevation(doc, pipe.from),
-      elevationTo: portElevation(doc, pipe.to),
+      // The ports were checked above, so this is portElevation (model/ports) without the checks.
+      elevationFrom: elevationOf(fromNode, pipe.from.port),
+      elevationTo: elevationOf(toNode, pipe.to.port),
     };
     pipes.set(pipe.id, graphPipe);
-    for (const ref of [pipe.from, pipe.to]) {
-      const key = portKey(ref.node, ref.port);
+    for (const key of [fromKey, toKey]) {
       const list = portPipes.get(key);
       if (list) list.push(graphPipe);
       else portPipes.set(key, [graphPipe]);
@@ -271,7 +280,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   }
 
   const nodeLink = new Map<Id, number>();
-  for (const node of Object.values(doc.nodes)) {
+  for (const node of sheetNodes) {
     if (!usable.has(node.id)) continue;
     for (const port of portsNeedingPipe(node)) {
       if (!portPipes.has(portKey(node.id, port)))
@@ -305,6 +314,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
     portPipes,
     nodeLink,
     nodeElements,
+    sheetNodes,
     findings: out,
   };
 }

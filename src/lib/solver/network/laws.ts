@@ -11,6 +11,8 @@
 import { ISA_STANDARD_GRAVITY } from '../../physics/atmosphere';
 import {
   colebrookWhite,
+  darcyFrictionFactor,
+  type FrictionFactorResult,
   LAMINAR_LIMIT_REYNOLDS,
   reynoldsNumber,
   TURBULENT_LIMIT_REYNOLDS,
@@ -141,10 +143,31 @@ export class PipeLaw implements LinkLaw {
     return this.memoSlope + endSlope;
   }
 
+  /**
+   * Darcy friction factor and flow regime at this flow, as physics/friction's
+   * darcyFrictionFactor gives them; above the laminar limit it is the factor already found for
+   * this flow by the loss evaluation (no second Colebrook–White solve).
+   */
+  frictionFactor(flow: number): FrictionFactorResult {
+    const re = this.reynolds(flow);
+    if (this.length > 0 && re > LAMINAR_LIMIT_REYNOLDS && Number.isFinite(re)) {
+      this.evaluateFriction(flow);
+      const uncertain = re < TURBULENT_LIMIT_REYNOLDS;
+      return {
+        factor: this.memoFactor,
+        regime: uncertain ? 'transitional' : 'turbulent',
+        uncertain,
+      };
+    }
+    return darcyFrictionFactor(re, this.relativeRoughness);
+  }
+
   /** Flow of the last friction evaluation (NaN before the first), and its loss and slope. */
   private memoFlow = NaN;
   private memoLoss = 0;
   private memoSlope = 0;
+  /** Darcy friction factor of the last evaluation (turbulent and transitional flow only). */
+  private memoFactor = 0;
   /** Colebrook–White f at Re = 4000 for this pipe, the upper end of the transition (lazy). */
   private turbulentAtLimit = NaN;
 
@@ -196,6 +219,7 @@ export class PipeLaw implements LinkLaw {
       const dxdRe = (2 * b * x) / (Math.LN10 * s * re) / (1 + (2 * b) / (Math.LN10 * s));
       dfdRe = (-2 * dxdRe) / (x * x * x);
     }
+    this.memoFactor = f;
     const v = flow / this.area;
     const speed = Math.abs(v);
     const lOverD2g = this.length / this.diameter / (2 * GRAVITY);
