@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { createDocument, createNode, createPipe } from '../../src/lib/model/defaults';
 import { portPosition } from '../../src/lib/model/ports';
 import {
+  createRouteCache,
+  keepSameSets,
   labelAnchor,
   orthogonalRoute,
   pipeRoute,
@@ -84,5 +86,32 @@ describe('pipe routes on the sheet', () => {
         { x: 3, y: 4 },
       ]),
     ).toBe('M 1 2 L 3 4');
+  });
+});
+
+describe('route memo for redraws', () => {
+  it('gives the same route back until the pipe or an end node changes', () => {
+    const doc = createDocument('t');
+    doc.nodes = {
+      P1: createNode('pump', { x: 0, y: 0 }, 'P1'),
+      F1: createNode('fitting', { x: 200, y: 100 }, 'F1'),
+    };
+    const pipe = createPipe({ node: 'P1', port: 'discharge' }, { node: 'F1', port: 'in' }, 'L1');
+    doc.pipes = { L1: pipe };
+    const routeOf = createRouteCache();
+    const first = routeOf(doc, pipe);
+    expect(routeOf(doc, pipe)).toBe(first);
+    const moved = { ...doc, nodes: { ...doc.nodes, F1: { ...doc.nodes.F1, y: 140 } } };
+    const second = routeOf(moved, pipe);
+    expect(second).not.toBe(first);
+    expect(second![second!.length - 1]).toEqual(portPosition(moved.nodes.F1, 'in'));
+  });
+
+  it('keepSameSets reuses unchanged port sets', () => {
+    const a = new Map([['P1', new Set(['suction'])]]);
+    const b = keepSameSets(a, new Map([['P1', new Set(['suction'])]]));
+    expect(b.get('P1')).toBe(a.get('P1'));
+    const c = keepSameSets(a, new Map([['P1', new Set(['suction', 'discharge'])]]));
+    expect(c.get('P1')).not.toBe(a.get('P1'));
   });
 });

@@ -109,3 +109,35 @@ export function connectedPortsOf(doc: HeadrouteDocument): Map<string, Set<string
   }
   return map;
 }
+
+/**
+ * A memo of pipe routes: a pipe whose record and end nodes are the same objects as last time
+ * (immer keeps untouched records identical) gets the same route array back, so only the
+ * pipes at a moved node are redrawn.
+ */
+export function createRouteCache(): (doc: HeadrouteDocument, pipe: Pipe) => Point[] | null {
+  const cache = new WeakMap<Pipe, { from: SheetNode; to: SheetNode; route: Point[] }>();
+  return (doc, pipe) => {
+    const from = doc.nodes[pipe.from.node];
+    const to = doc.nodes[pipe.to.node];
+    if (!from || !to) return null;
+    const hit = cache.get(pipe);
+    if (hit && hit.from === from && hit.to === to) return hit.route;
+    const route = pipeRoute(doc, pipe)!;
+    cache.set(pipe, { from, to, route });
+    return route;
+  };
+}
+
+/** Reuse the previous map's port sets where their contents did not change. */
+export function keepSameSets(
+  previous: Map<string, Set<string>> | null,
+  next: Map<string, Set<string>>,
+): Map<string, Set<string>> {
+  if (!previous) return next;
+  for (const [id, set] of next) {
+    const old = previous.get(id);
+    if (old && old.size === set.size && [...set].every((p) => old.has(p))) next.set(id, old);
+  }
+  return next;
+}
