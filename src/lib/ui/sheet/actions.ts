@@ -4,6 +4,7 @@
  */
 import {
   addNode,
+  connect,
   copyElements,
   deleteElements,
   duplicateElements,
@@ -11,7 +12,7 @@ import {
   pasteElements,
 } from '../../model/commands';
 import type { Clip } from '../../model/commands';
-import type { Id } from '../../model/types';
+import type { Id, PortRef } from '../../model/types';
 import { editor } from '../editor.svelte';
 import type { ShelfPart } from '../shelf/parts';
 import { GRID, snapPoint, type SheetPoint } from './viewport';
@@ -72,4 +73,39 @@ export function pasteAt(at: SheetPoint): void {
 /** Whether something has been copied. */
 export function hasClipboard(): boolean {
   return clipboard !== null;
+}
+
+/**
+ * The pipe tool's result as one undo step: a waypoint at each bend and pipes joining
+ * `from` → bends → `to`. Any refusal rolls the whole drawing back (the reason is in the status).
+ */
+export function drawPipe(
+  from: PortRef,
+  bends: SheetPoint[],
+  to: PortRef,
+  at: { x: number; y: number },
+): void {
+  const start = editor.doc;
+  editor.beginGesture();
+  let prev = from;
+  for (const bend of bends) {
+    const created = editor.dispatch(addNode('waypoint', bend), at);
+    const id = created ? created[0] : undefined;
+    if (!id || !editor.dispatch(connect(prev, { node: id, port: 'in' }), at)) {
+      return editor.cancelGesture();
+    }
+    prev = { node: id, port: 'out' };
+  }
+  if (!editor.dispatch(connect(prev, to), at)) return editor.cancelGesture();
+  editor.endGesture();
+  editor.select([
+    ...Object.keys(editor.doc.nodes).filter((k) => !Object.hasOwn(start.nodes, k)),
+    ...Object.keys(editor.doc.pipes).filter((k) => !Object.hasOwn(start.pipes, k)),
+  ]);
+  const n = bends.length;
+  editor.say(
+    n > 0
+      ? `Pipe drawn with ${n} waypoint${n === 1 ? '' : 's'}; set their elevations in details.`
+      : 'Pipe drawn.',
+  );
 }
