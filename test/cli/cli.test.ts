@@ -60,7 +60,7 @@ describe('headroute solve: golden key figures of the demo projects', () => {
     near(pump.npshRequired, 2.602);
     near(r.route.lowestVapourMargin, 102.3e3);
     near(r.route.lowestChainage, 8.0);
-    expect(r.route.lowestElementName).toBe('Suction 4" Sch 40 CS');
+    expect(r.route.lowestElementName).toBe('Suction, strainer to pump');
     expect(r.counts.stop).toBe(0);
   }, 30_000);
 
