@@ -4,10 +4,20 @@
  * that document revision. Demo projects and a generated sheet of about 1,000 elements.
  * Figures are printed (median and 95th percentile), never asserted.
  *
- * Run: npx tsx bench/ui-drag.bench.ts   (starts its own `vite dev` on BENCH_PORT, default 4183)
+ * Run: npx tsx bench/ui-drag.bench.ts
+ * By default it measures the production build: `vite build`, then the built app is copied to a
+ * temporary folder and served from there by a small static server on BENCH_PORT (default 4183),
+ * so another build into build/ cannot change it mid-run. BENCH_DEV=1 measures `vite dev`
+ * instead (unbundled modules, slower); BENCH_SKIP_BUILD=1 serves the existing build/.
+ * BENCH_PROFILE=1 also records a Chromium CPU profile during each sheet's drag and prints the
+ * functions with the most self time (BENCH_MINIFY=0 builds unminified for readable names).
  */
-import { chromium, type Page } from '@playwright/test';
-import { spawn } from 'node:child_process';
+import { chromium, type CDPSession, type Page } from '@playwright/test';
+import { spawn, spawnSync } from 'node:child_process';
+import { cpSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
+import { createServer, type Server } from 'node:http';
+import { tmpdir } from 'node:os';
+import { extname, join, normalize } from 'node:path';
 import { findChromium } from '../scripts/browser-path.js';
 import { EXAMPLES } from '../src/lib/model/examples';
 import { serializeProject } from '../src/lib/model/file';
@@ -15,6 +25,139 @@ import { network } from './networks';
 
 const PORT = Number(process.env.BENCH_PORT ?? 4183);
 const MOVES = Number(process.env.BENCH_MOVES ?? 40);
+const DEV = Boolean(process.env.BENCH_DEV);
+const PROFILE = Boolean(process.env.BENCH_PROFILE);
+
+const TYPES: Record<string, string> = {
+  '.html': 'text/html',
+  '.js': 'text/javascript',
+  '.css': 'text/css',
+  '.json': 'application/json',
+  '.svg': 'image/svg+xml',
+  '.woff2': 'font/woff2',
+  '.woff': 'font/woff',
+  '.webmanifest': 'application/manifest+json',
+};
+
+/** Serve a built single-page app from `root` (unknown paths get index.html, as the host does). */
+function serveStatic(root: string, port: number): Promise<Server> {
+  const server = createServer((req, res) => {
+    const path = normalize(decodeURIComponent(new URL(req.url ?? '/', 'http://x').pathname));
+    let file = join(root, path);
+    try {
+      if (!file.startsWith(root) || !statSync(file).isFile()) file = join(root, 'index.html');
+    } catch {
+      file = join(root, 'index.html');
+    }
+    res.writeHead(200, { 'content-type': TYPES[extname(file)] ?? 'application/octet-stream' });
+    res.end(readFileSync(file));
+  });
+  return new Promise((resolve) => server.listen(port, '127.0.0.1', () => resolve(server)));
+}
+
+/** Build the app and copy it to a temporary folder; returns that folder. */
+function buildApp(): string {
+  if (!process.env.BENCH_SKIP_BUILD) {
+    const args = ['build', ...(process.env.BENCH_MINIFY === '0' ? ['--minify', 'false'] : [])];
+    const built = spawnSync('node_modules/.bin/vite', args, {
+      stdio: ['ignore', 'ignore', 'inherit'],
+    });
+    if (built.status !== 0) throw new Error(`vite build failed (exit ${built.status})`);
+  }
+  const dir = mkdtempSync(join(tmpdir(), 'headroute-bench-'));
+  cpSync('build', dir, { recursive: true });
+  return dir;
+}
+
+interface ProfileNode {
+  id: number;
+  callFrame: { functionName: string; url: string; lineNumber: number };
+  hitCount?: number;
+}
+
+/** Folder the built app is served from (for naming the source module of a profiled line). */
+let servedDir: string | null = null;
+const markers = new Map<string, Array<{ line: number; module: string }>>();
+
+/**
+ * The source module a line of an unminified bundle came from: the bundler writes a
+ * `// src/...` comment before each module's code.
+ */
+function moduleAt(url: string, line: number): string {
+  if (!servedDir || !url.includes('/_app/')) return '';
+  const path = new URL(url).pathname;
+  let list = markers.get(path);
+  if (!list) {
+    list = [];
+    try {
+      readFileSync(join(servedDir, path), 'utf8')
+        .split('\n')
+        .forEach((text, i) => {
+          const m = /^\/\/ ((?:src|node_modules)\/\S+)/.exec(text);
+          if (m) list!.push({ line: i, module: m[1] });
+        });
+    } catch {
+      // not a file of ours
+    }
+    markers.set(path, list);
+  }
+  let found = '';
+  for (const m of list) {
+    if (m.line > line) break;
+    found = m.module;
+  }
+  return found.replace(/^node_modules\/(\.pnpm\/)?/, '');
+}
+
+/** Self time summed by source module (needs an unminified build), as printable lines. */
+function topModules(
+  profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] },
+  n = Number(process.env.BENCH_TOP ?? 12),
+) {
+  const byNode = new Map<number, number>();
+  profile.samples.forEach((id, i) =>
+    byNode.set(id, (byNode.get(id) ?? 0) + (profile.timeDeltas[i] ?? 0)),
+  );
+  const total = new Map<string, number>();
+  for (const node of profile.nodes) {
+    const f = node.callFrame;
+    const key = moduleAt(f.url, f.lineNumber) || f.functionName || '(anonymous)';
+    total.set(key, (total.get(key) ?? 0) + (byNode.get(node.id) ?? 0));
+  }
+  return [...total.entries()]
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, n)
+    .map(([k, us]) => `    ${(us / 1000).toFixed(1).padStart(8)} ms  ${k}`);
+}
+
+/** The functions with the most self time in a CDP CPU profile, as printable lines. */
+function topSelfTime(
+  profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] },
+  n = 15,
+) {
+  const byNode = new Map<number, number>();
+  profile.samples.forEach((id, i) =>
+    byNode.set(id, (byNode.get(id) ?? 0) + (profile.timeDeltas[i] ?? 0)),
+  );
+  const total = new Map<string, number>();
+  let sum = 0;
+  for (const node of profile.nodes) {
+    const us = byNode.get(node.id) ?? 0;
+    sum += us;
+    const f = node.callFrame;
+    const file = f.url.split('/').pop() ?? '';
+    const where = moduleAt(f.url, f.lineNumber) || file;
+    const key = `${f.functionName || '(anonymous)'}  ${where}${file ? `:${f.lineNumber + 1}` : ''}`;
+    total.set(key, (total.get(key) ?? 0) + us);
+  }
+  return [...total.entries()]
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, n)
+    .map(
+      ([k, us]) =>
+        `    ${(us / 1000).toFixed(1).padStart(8)} ms ${((100 * us) / sum).toFixed(1).padStart(5)}%  ${k}`,
+    );
+}
 
 function quantile(sorted: number[], q: number): number {
   const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil(q * sorted.length) - 1));
@@ -87,7 +230,7 @@ const PROBE = `
   }
 `;
 
-async function measure(page: Page, label: string) {
+async function measure(page: Page, label: string, cdp: CDPSession | null) {
   // the dev server may have reloaded the page since the last sheet
   await page.evaluate(PROBE);
   await page.waitForFunction("!document.querySelector('.sheet-wrap')?.classList.contains('stale')");
@@ -101,12 +244,37 @@ async function measure(page: Page, label: string) {
   await page.mouse.move(x, y);
   await page.mouse.down();
   await page.evaluate('window.__armed = true');
+  const metrics = async () =>
+    new Map(
+      (
+        (await cdp!.send('Performance.getMetrics')).metrics as Array<{
+          name: string;
+          value: number;
+        }>
+      ).map((m) => [m.name, m.value]),
+    );
+  const before = cdp ? await metrics() : null;
+  if (cdp) await cdp.send('Profiler.start');
   for (let i = 1; i <= MOVES; i++) {
     const before = Number(await page.evaluate('window.__samples.length'));
     await page.mouse.move(x + (i % 2 === 1 ? step : 0), y);
     await page.waitForFunction(`window.__samples.length > ${before}`, null, { timeout: 10_000 });
   }
   await page.evaluate('window.__armed = false');
+  const profile = cdp ? (await cdp.send('Profiler.stop')).profile : null;
+  if (cdp && before) {
+    const after = await metrics();
+    const names = ['TaskDuration', 'ScriptDuration', 'RecalcStyleDuration', 'LayoutDuration'];
+    console.log(
+      '  main thread per move, ms: ' +
+        names
+          .map(
+            (n) =>
+              `${n.replace('Duration', '')} ${((1000 * ((after.get(n) ?? 0) - (before.get(n) ?? 0))) / MOVES).toFixed(1)}`,
+          )
+          .join(', '),
+    );
+  }
   await page.mouse.up();
   const samples = (await page.evaluate(
     '(() => { const s = window.__samples; window.__samples = []; return s; })()',
@@ -118,21 +286,39 @@ async function measure(page: Page, label: string) {
   console.log(
     `${label.padEnd(44)} ${String(elements).padStart(5)}  ${f(quantile(sheet, 0.5))} ${f(quantile(sheet, 0.95))}   ${f(quantile(solved, 0.5))} ${f(quantile(solved, 0.95))}`,
   );
+  if (profile) {
+    console.log('  self time by function:');
+    console.log(topSelfTime(profile as never).join('\n'));
+    console.log('  self time by source module:');
+    console.log(topModules(profile as never).join('\n'));
+  }
   // put the node back: undo the drag (one step)
   await page.keyboard.press('Control+z');
 }
 
 async function main() {
-  // Own process group, so the whole server goes when the benchmark ends.
-  const server = spawn(
-    'node_modules/.bin/vite',
-    ['dev', '--port', String(PORT), '--strictPort', '--host', '127.0.0.1'],
-    { stdio: ['ignore', 'ignore', 'inherit'], detached: true },
-  );
-  const stop = () => {
-    if (server.pid && server.exitCode === null) process.kill(-server.pid, 'SIGTERM');
-  };
-  process.on('exit', stop);
+  let stop = () => {};
+  if (DEV) {
+    // Own process group, so the whole server goes when the benchmark ends.
+    const server = spawn(
+      'node_modules/.bin/vite',
+      ['dev', '--port', String(PORT), '--strictPort', '--host', '127.0.0.1'],
+      { stdio: ['ignore', 'ignore', 'inherit'], detached: true },
+    );
+    stop = () => {
+      if (server.pid && server.exitCode === null) process.kill(-server.pid, 'SIGTERM');
+    };
+  } else {
+    const dir = buildApp();
+    servedDir = dir;
+    const server = await serveStatic(dir, PORT);
+    stop = () => {
+      server.close();
+      server.closeAllConnections();
+      rmSync(dir, { recursive: true, force: true });
+    };
+  }
+  process.on('exit', () => stop());
   const url = `http://127.0.0.1:${PORT}/`;
   try {
     await waitForServer(url);
@@ -140,25 +326,36 @@ async function main() {
       executablePath: findChromium(),
       args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking'],
     });
-    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    const page = await context.newPage();
+    let cdp: CDPSession | null = null;
+    if (PROFILE) {
+      cdp = await context.newCDPSession(page);
+      await cdp.send('Profiler.enable');
+      await cdp.send('Performance.enable');
+      await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+    }
     // the unsaved-changes question when switching sheets: yes, discard
     page.on('dialog', (d) => void d.accept().catch(() => undefined));
     await page.goto(url);
     await page.locator('g.node[data-kind="pump"]').first().waitFor({ timeout: 60_000 });
     await page.evaluate(PROBE);
     console.log(
-      `UI drag benchmark: ${MOVES} pointer moves per sheet, times in ms (Chromium, headless)`,
+      `UI drag benchmark (${DEV ? 'vite dev' : 'production build'}): ${MOVES} pointer moves per sheet, times in ms (Chromium, headless)`,
     );
     console.log(
       `${'sheet'.padEnd(44)} ${'elems'.padStart(5)}  ${'moved p50'.padStart(7)} ${'p95'.padStart(7)}   ${'solved p50'.padStart(7)} ${'p95'.padStart(7)}`,
     );
-    for (const example of EXAMPLES) {
+    // BENCH_SHEETS=generated (or a demo title's first word) limits the run to some sheets.
+    const only = process.env.BENCH_SHEETS?.toLowerCase();
+    for (const example of EXAMPLES.filter((e) => !only || e.title.toLowerCase().includes(only))) {
       await page.getByRole('button', { name: /Project/ }).click();
       await page.getByRole('menuitem', { name: example.title }).click();
       await page.getByLabel('Project name').waitFor();
       await page.waitForTimeout(500);
-      await measure(page, example.title);
+      await measure(page, example.title, cdp);
     }
+    if (only && !'generated'.includes(only)) return;
     await page.locator('input[type="file"]').setInputFiles({
       name: 'generated.headroute.json',
       mimeType: 'application/json',
@@ -167,7 +364,7 @@ async function main() {
     await page.waitForFunction("document.querySelectorAll('g.node').length > 400", null, {
       timeout: 60_000,
     });
-    await measure(page, 'Generated series, ~1,000 elements');
+    await measure(page, 'Generated series, ~1,000 elements', cdp);
     await browser.close();
   } finally {
     stop();
