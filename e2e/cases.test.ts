@@ -114,12 +114,29 @@ test('a hot-liquid case on demo 1 becomes the worst NPSH case in the comparison'
     .getByRole('dialog', { name: 'Cases compared' })
     .getByRole('button', { name: 'Close' })
     .click();
+  await expect(page.getByRole('dialog', { name: 'Cases compared' })).toHaveCount(0);
   const profile = page.getByTestId('profile-panel');
+  // The envelope is off until asked for (it solves every case).
+  await expect(profile.locator('[data-envelope="band"]')).toHaveCount(0);
+  await profile.getByLabel('Envelope of all cases').check();
   await expect(profile.locator('[data-envelope="band"]')).toHaveAttribute('d', /^M[\d.]+ [\d.]+L/);
   const pumpMark = profile.locator(`[data-envelope-pump="${pumpId}"]`);
   await expect(pumpMark).toHaveAttribute('data-worst-case', HOT_NAME);
   await expect(pumpMark).toContainText(`least NPSH margin: ${HOT_NAME}`);
+  // The note sits above the plot, clear of the grade lines.
+  const plotTop = Number(await profile.locator('rect.plot').getAttribute('y'));
+  expect(Number(await pumpMark.getAttribute('y'))).toBeLessThan(plotTop);
   await page.screenshot({ path: `${SHOTS}/cases-envelope.png` });
+  await panel.getByRole('button', { name: 'Compare' }).click();
+  // The comparison sits under the sheet: the case list and the profile stay in view.
+  const dialog = page.getByRole('dialog', { name: 'Cases compared' });
+  await expect(dialog).toBeVisible();
+  await expect(panel.getByRole('button', { name: `Show ${HOT_NAME}` })).toBeInViewport();
+  await expect(profile.locator('rect.plot')).toBeInViewport();
+  // Escape closes it and gives focus back to Compare; Compare opens it again.
+  await dialog.press('Escape');
+  await expect(dialog).toHaveCount(0);
+  await expect(panel.getByRole('button', { name: 'Compare' })).toBeFocused();
   await panel.getByRole('button', { name: 'Compare' }).click();
 
   // The table follows edits: a cooler hot case is no longer the worst NPSHa.

@@ -13,6 +13,7 @@ import { displayUnit, fromDisplay, toDisplay } from '../units';
 import { isPipeStation, markedSpans } from './markedSpans';
 import { LINE_GAP, npshNotes, placeLabels, placeSpans } from './profileAnnotations';
 import { groupRuns, levelMarks, nodePlaces, nodeSteps } from './profileMarks';
+import { placeTopNotes } from './topNotes';
 import type {
   ChartSize,
   ElementLabel,
@@ -72,8 +73,10 @@ export function profileGeometry(
   );
   const spanDraft = placeSpans(markedSpans(stations), { x, system, fontSize, plot, c0, c1 });
   const spanLanes = Math.max(0, ...spanDraft.map((s) => s.lane + 1));
+  const noteDraft = placeTopNotes(options.topNotes ?? [], { x, plot, fontSize, c0, c1 });
+  const noteLanes = Math.max(0, ...noteDraft.map((n) => n.lane + 1));
   const labelLanes = Math.max(0, ...labelDraft.map((l) => l.lane + 1));
-  plot.top = options.margin?.top ?? 12 + spanLanes * lineHeight;
+  plot.top = options.margin?.top ?? 12 + (spanLanes + noteLanes) * lineHeight;
   const bottom = options.margin?.bottom ?? (labelLanes ? 40 + labelLanes * lineHeight : 38);
   plot.height = Math.max(10, size.height - plot.top - bottom);
   const axisY = plot.top + plot.height;
@@ -126,6 +129,10 @@ export function profileGeometry(
     ...s,
     labelY: plot.top - 6 - lane * lineHeight,
   }));
+  const topNotes = noteDraft.map((n) => ({
+    ...n,
+    y: plot.top - 6 - (spanLanes + n.lane) * lineHeight,
+  }));
   const npsh = npshNotes(pipeLine, options.pumps, { x, y, system, fontSize, plot, inWindow });
 
   const ticks = {
@@ -154,6 +161,7 @@ export function profileGeometry(
     spans,
     labels,
     npsh,
+    topNotes,
     ticks,
     axisTitles,
     chainageRange,

@@ -7,6 +7,7 @@ import type { Id, NodeKind, SheetNode } from '../model/types';
 import type { PumpResult } from '../solver/types';
 import type { UnitSystem } from '../units';
 import type { MarkedSpan } from './markedSpans';
+import type { PlacedTopNote, TopNote } from './topNotes';
 
 /** Box the chart is drawn in, px. */
 export interface ChartSize {
@@ -34,6 +35,8 @@ export interface ProfileChartOptions {
   /** Fixed elevation range, m (kept while a waypoint is dragged); fitted to the profile when absent. */
   elevationWindow?: [number, number];
   margin?: Partial<ChartMargin>;
+  /** Notes to place in lanes of their own above the span labels (e.g. the case envelope's). */
+  topNotes?: readonly TopNote[];
   /** Font size of labels, px. */
   fontSize?: number;
 }
@@ -135,6 +138,8 @@ export interface ProfileGeometry {
   spans: PlacedSpan[];
   labels: ElementLabel[];
   npsh: NpshNote[];
+  /** The `topNotes` asked for, placed above the plot clear of the grade lines (empty if none). */
+  topNotes: PlacedTopNote[];
   ticks: { x: Tick[]; y: Tick[] };
   axisTitles: { x: string; y: string };
   /** Full chainage range of the route, m. */

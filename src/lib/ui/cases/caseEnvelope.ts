@@ -4,6 +4,7 @@
  * case with the least NPSH margin. Pure; solves each case once.
  */
 import { hglEnvelope, type Envelope, type EnvelopeCase } from '../../chart/envelope';
+import type { TopNote } from '../../chart/topNotes';
 import type { HeadrouteDocument, Id } from '../../model/types';
 import { profile } from '../../solver/profile';
 import { solve } from '../../solver/solve';
@@ -69,4 +70,24 @@ export function caseEnvelope(
     if (worst && suction) pumps.push(worst);
   }
   return { ...envelope, caseNames: cases.map((c) => c.name), pumps };
+}
+
+/**
+ * The envelope's words for the profile's note lanes above the plot: the worst case over each
+ * merged marked span and, at each pump's suction, the case with the least NPSH margin.
+ */
+export function envelopeNotes(envelope: CaseEnvelope): TopNote[] {
+  return [
+    ...envelope.spans.map((s) => ({
+      key: `span:${s.kind}:${s.start}`,
+      text: `worst: ${s.worstCaseName}`,
+      start: s.start,
+      end: s.end,
+    })),
+    ...envelope.pumps.map((p) => ({
+      key: `pump:${p.pumpId}`,
+      text: `least NPSH margin: ${p.caseName}`,
+      start: p.chainage,
+    })),
+  ];
 }
