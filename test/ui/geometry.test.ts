@@ -2,13 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { createDocument, createNode, createPipe } from '../../src/lib/model/defaults';
 import { portPosition } from '../../src/lib/model/ports';
 import {
-  createRouteCache,
   keepSameSets,
   labelAnchor,
   orthogonalRoute,
   pipeRoute,
   polylinePath,
   portDirection,
+  routeBetween,
   PORT_LEAD,
   simplify,
 } from '../../src/lib/ui/sheet/geometry';
@@ -89,8 +89,8 @@ describe('pipe routes on the sheet', () => {
   });
 });
 
-describe('route memo for redraws', () => {
-  it('gives the same route back until the pipe or an end node changes', () => {
+describe('redraw helpers', () => {
+  it('routeBetween gives the route pipeRoute draws, from the end node records', () => {
     const doc = createDocument('t');
     doc.nodes = {
       P1: createNode('pump', { x: 0, y: 0 }, 'P1'),
@@ -98,13 +98,10 @@ describe('route memo for redraws', () => {
     };
     const pipe = createPipe({ node: 'P1', port: 'discharge' }, { node: 'F1', port: 'in' }, 'L1');
     doc.pipes = { L1: pipe };
-    const routeOf = createRouteCache();
-    const first = routeOf(doc, pipe);
-    expect(routeOf(doc, pipe)).toBe(first);
-    const moved = { ...doc, nodes: { ...doc.nodes, F1: { ...doc.nodes.F1, y: 140 } } };
-    const second = routeOf(moved, pipe);
-    expect(second).not.toBe(first);
-    expect(second![second!.length - 1]).toEqual(portPosition(moved.nodes.F1, 'in'));
+    const route = routeBetween(pipe, doc.nodes.P1, doc.nodes.F1);
+    expect(route).toEqual(pipeRoute(doc, pipe));
+    expect(route[0]).toEqual(portPosition(doc.nodes.P1, 'discharge'));
+    expect(route[route.length - 1]).toEqual(portPosition(doc.nodes.F1, 'in'));
   });
 
   it('keepSameSets reuses unchanged port sets', () => {

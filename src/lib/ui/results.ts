@@ -4,7 +4,7 @@
  */
 import { nodeLabel } from '../model/labels';
 import type { HeadrouteDocument, Id } from '../model/types';
-import type { Finding, FindingLevel, SolveResult } from '../solver/types';
+import type { Finding, FindingLevel, NodeResult, SolveResult } from '../solver/types';
 import { formatQuantity } from '../units/format';
 import type { UnitSystem } from '../units/quantities';
 
@@ -125,13 +125,12 @@ export function readoutLines(
 
 /** Short pressure text shown beside a node on the sheet (gauge, at its first port). */
 export function nodePressureText(
-  result: SolveResult | null,
-  id: Id,
+  result: NodeResult | null | undefined,
   port: string | undefined,
   system: UnitSystem,
 ): string | null {
   if (!result || !port) return null;
-  const pr = result.nodes[id]?.ports[port];
+  const pr = result.ports[port];
   if (!pr || !Number.isFinite(pr.pressureGauge)) return null;
   return formatQuantity(pr.pressureGauge, 'pressureGauge', system, { digits: 3 });
 }

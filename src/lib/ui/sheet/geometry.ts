@@ -61,6 +61,11 @@ export function pipeRoute(doc: HeadrouteDocument, pipe: Pipe): Point[] | null {
   const from = doc.nodes[pipe.from.node];
   const to = doc.nodes[pipe.to.node];
   if (!from || !to) return null;
+  return routeBetween(pipe, from, to);
+}
+
+/** The route of a pipe between its two end nodes (given, so a view can pass the records). */
+export function routeBetween(pipe: Pipe, from: SheetNode, to: SheetNode): Point[] {
   return orthogonalRoute(
     portPosition(from, pipe.from.port),
     portDirection(from, pipe.from.port),
@@ -108,25 +113,6 @@ export function connectedPortsOf(doc: HeadrouteDocument): Map<string, Set<string
     }
   }
   return map;
-}
-
-/**
- * A memo of pipe routes: a pipe whose record and end nodes are the same objects as last time
- * (immer keeps untouched records identical) gets the same route array back, so only the
- * pipes at a moved node are redrawn.
- */
-export function createRouteCache(): (doc: HeadrouteDocument, pipe: Pipe) => Point[] | null {
-  const cache = new WeakMap<Pipe, { from: SheetNode; to: SheetNode; route: Point[] }>();
-  return (doc, pipe) => {
-    const from = doc.nodes[pipe.from.node];
-    const to = doc.nodes[pipe.to.node];
-    if (!from || !to) return null;
-    const hit = cache.get(pipe);
-    if (hit && hit.from === from && hit.to === to) return hit.route;
-    const route = pipeRoute(doc, pipe)!;
-    cache.set(pipe, { from, to, route });
-    return route;
-  };
 }
 
 /** Reuse the previous map's port sets where their contents did not change. */
