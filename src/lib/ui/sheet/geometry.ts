@@ -102,10 +102,10 @@ export function labelAnchor(points: Point[]): { x: number; y: number; angle: num
   return best;
 }
 
-/** For each node, the names of its ports that have a pipe. */
-export function connectedPortsOf(doc: HeadrouteDocument): Map<string, Set<string>> {
+/** For each node, the names of its ports that have a pipe (from the document's pipes). */
+export function connectedPortsOf(pipes: HeadrouteDocument['pipes']): Map<string, Set<string>> {
   const map = new Map<string, Set<string>>();
-  for (const p of Object.values(doc.pipes)) {
+  for (const p of Object.values(pipes)) {
     for (const end of [p.from, p.to]) {
       let set = map.get(end.node);
       if (!set) map.set(end.node, (set = new Set()));
