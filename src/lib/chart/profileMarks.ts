@@ -43,8 +43,12 @@ export function nodePlaces(
   });
   const runs = groupRuns(line.filter((s) => s.at === 'pipe'));
   if (route.length >= 2 && runs.length === route.length - 1) {
+    // The first station of each node of its own, looked up once (a find per node was
+    // quadratic in the route's length).
+    const ownOf = new Map<Id, Station>();
+    for (const s of line) if (s.at !== 'pipe' && !ownOf.has(s.elementId)) ownOf.set(s.elementId, s);
     return route.map((id, k) => {
-      const own = line.find((s) => s.elementId === id && s.at !== 'pipe');
+      const own = ownOf.get(id);
       if (own) return place(id, own);
       return place(id, k < runs.length ? runs[k][0] : runs[k - 1][runs[k - 1].length - 1]);
     });
