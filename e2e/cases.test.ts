@@ -118,7 +118,7 @@ test('a hot-liquid case on demo 1 becomes the worst NPSH case in the comparison'
   const profile = page.getByTestId('profile-panel');
   // The envelope is off until asked for (it solves every case).
   await expect(profile.locator('[data-envelope="band"]')).toHaveCount(0);
-  await profile.getByLabel('Envelope of all cases').check();
+  await profile.getByLabel('Case envelope').check();
   await expect(profile.locator('[data-envelope="band"]')).toHaveAttribute('d', /^M[\d.]+ [\d.]+L/);
   const pumpMark = profile.locator(`[data-envelope-pump="${pumpId}"]`);
   await expect(pumpMark).toHaveAttribute('data-worst-case', HOT_NAME);

@@ -74,7 +74,7 @@ test('the case envelope is off until asked for, and its notes sit above the plot
 }) => {
   await openDemo1(page);
   const profile = page.getByTestId('profile-panel');
-  const toggle = profile.getByLabel('Envelope of all cases');
+  const toggle = profile.getByLabel('Case envelope');
   await expect(toggle).not.toBeChecked();
   await expect(profile.locator('[data-envelope="band"]')).toHaveCount(0);
   await toggle.check();

@@ -155,19 +155,80 @@ export function npshNotes(
     3,
   );
   const lineHeight = ctx.fontSize * LINE_GAP;
+  const plotBottom = ctx.plot.top + ctx.plot.height;
   return notes.map((n, i) => {
     const anchorY = ctx.y(Number.isFinite(n.s.hgl) ? n.s.hgl : n.s.elevation);
-    // Below both the HGL and the pipe at the suction, where the chart is usually clear.
-    const below = Math.max(anchorY, ctx.y(n.s.elevation));
-    const top = Math.max(ctx.plot.top + lineHeight, below + 16 + lanes[i].lane * 2 * lineHeight);
+    const left = lanes[i].left;
+    const stack = lanes[i].lane * 2 * lineHeight;
+    // The note goes in the free gap between the lines drawn across its width that lies
+    // nearest the suction (under the pipe, between pipe and HGL, ...), so no line crosses it.
+    const need = NOTE_ASCENT + NOTE_DESCENT + 8 + stack;
+    const gaps = freeGaps(line, ctx.x, ctx.y, left - 2, left + n.width + 2, ctx.plot);
+    const fits = gaps.filter(([top, bottom]) => bottom - top >= need);
+    const distance = ([top, bottom]: [number, number]) =>
+      anchorY < top ? top - anchorY : anchorY > bottom ? anchorY - bottom : 0;
+    const gap = fits.sort((p, q) => distance(p) - distance(q))[0];
+    const lowest = Math.max(anchorY, ctx.y(n.s.elevation));
+    const y = !gap
+      ? Math.min(
+          Math.max(ctx.plot.top + lineHeight, lowest + 16 + stack),
+          plotBottom - lineHeight - 2,
+        )
+      : gap[0] >= anchorY - 1e-9
+        ? gap[0] + 4 + NOTE_ASCENT + stack
+        : gap[1] - 4 - NOTE_DESCENT - stack;
     return {
       elementId: n.s.elementId,
       anchorX: ctx.x(n.s.chainage),
       anchorY,
-      x: lanes[i].left,
-      y: Math.min(top, ctx.plot.top + ctx.plot.height - lineHeight - 2),
+      x: left,
+      y,
       lines: n.lines,
       short: n.p.npshAvailable < n.p.npshRequired,
     };
   });
+}
+
+/** Height of an NPSH note above its first baseline, and below it (two lines 13 px apart), px. */
+const NOTE_ASCENT = 10;
+const NOTE_DESCENT = 17;
+
+/**
+ * Vertical gaps [top, bottom] (px) inside the plot that none of the pipe, HGL, EGL and vapour
+ * lines crosses between x0 and x1 (each line's extent over the stations inside, and the nearest
+ * one either side, which bounds it across the edges).
+ */
+function freeGaps(
+  line: readonly Station[],
+  x: (c: number) => number,
+  y: (h: number) => number,
+  x0: number,
+  x1: number,
+  plot: ProfileGeometry['plot'],
+): Array<[number, number]> {
+  let first = line.findIndex((s) => x(s.chainage) >= x0);
+  if (first < 0) first = line.length;
+  let last = first;
+  while (last < line.length && x(line[last].chainage) <= x1) last++;
+  const near = line.slice(Math.max(0, first - 1), Math.min(line.length, last + 1));
+  const values: Array<(s: Station) => number> = [
+    (s) => s.elevation,
+    (s) => s.hgl,
+    (s) => s.egl,
+    (s) => s.vapourLine,
+  ];
+  const used: Array<[number, number]> = [];
+  for (const value of values) {
+    const ys = near.map(value).filter(Number.isFinite).map(y);
+    if (ys.length) used.push([Math.min(...ys), Math.max(...ys)]);
+  }
+  used.sort((p, q) => p[0] - q[0]);
+  const gaps: Array<[number, number]> = [];
+  let from = plot.top;
+  for (const [top, bottom] of used) {
+    if (top > from) gaps.push([from, Math.min(top, plot.top + plot.height)]);
+    from = Math.max(from, bottom);
+  }
+  if (from < plot.top + plot.height) gaps.push([from, plot.top + plot.height]);
+  return gaps.filter(([top, bottom]) => bottom > top);
 }
