@@ -88,3 +88,28 @@ test('the case envelope is off until asked for, and its notes sit above the plot
   await toggle.uncheck();
   await expect(profile.locator('[data-envelope="band"]')).toHaveCount(0);
 });
+
+test('the case envelope waits while a waypoint is dragged and catches up when it is let go', async ({
+  page,
+}) => {
+  await openDemo1(page);
+  const profile = page.getByTestId('profile-panel');
+  await profile.getByLabel('Case envelope').check();
+  const band = profile.locator('g[data-part="envelope"]');
+  await expect(band).toHaveCount(1);
+  await expect(band).not.toHaveClass(/stale/);
+
+  const handle = profile.locator('svg.chart [data-waypoint]').first();
+  const box = (await handle.boundingBox())!;
+  const start = { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+  await page.mouse.move(start.x, start.y);
+  await page.mouse.down();
+  await page.mouse.move(start.x, start.y - 20, { steps: 4 });
+  // Held: the document has changed, the envelope has not been solved again (drawn dimmed).
+  await page.waitForTimeout(600);
+  await expect(band).toHaveClass(/stale/);
+  await page.mouse.up();
+  // Let go: it is solved once for the new document.
+  await expect(band).not.toHaveClass(/stale/, { timeout: 5_000 });
+  await page.keyboard.press('Control+z');
+});
