@@ -52,7 +52,10 @@ function serveStatic(root: string, port: number): Promise<Server> {
     res.writeHead(200, { 'content-type': TYPES[extname(file)] ?? 'application/octet-stream' });
     res.end(readFileSync(file));
   });
-  return new Promise((resolve) => server.listen(port, '127.0.0.1', () => resolve(server)));
+  return new Promise((resolve, reject) => {
+    server.once('error', (error) => reject(new Error(`cannot serve on port ${port}: ${error}`)));
+    server.listen(port, '127.0.0.1', () => resolve(server));
+  });
 }
 
 /** Build the app and copy it to a temporary folder; returns that folder. */
@@ -296,6 +299,32 @@ async function measure(page: Page, label: string, cdp: CDPSession | null) {
   await page.keyboard.press('Control+z');
 }
 
+/**
+ * The probe's floor: the same measurement on a bare page whose pointermove handler only moves
+ * one SVG group. What a sheet adds is its figure minus this one (a frame must pass either way).
+ */
+async function measureFloor(page: Page) {
+  await page.setContent(
+    `<div class="sheet-wrap"><svg class="sheet" width="600" height="400"><g id="g"><rect width="40" height="40"/></g></svg></div>` +
+      `<script>addEventListener('pointermove', (e) => document.getElementById('g').setAttribute('transform', 'translate(' + e.clientX + ' 0)'));</script>`,
+  );
+  await page.evaluate(PROBE);
+  await page.mouse.move(20, 20);
+  await page.evaluate('window.__armed = true');
+  for (let i = 1; i <= MOVES; i++) {
+    const before = Number(await page.evaluate('window.__samples.length'));
+    await page.mouse.move(20 + (i % 2) * 21, 20);
+    await page.waitForFunction(`window.__samples.length > ${before}`, null, { timeout: 10_000 });
+  }
+  await page.evaluate('window.__armed = false');
+  const samples = (await page.evaluate('window.__samples')) as Array<{ sheet: number }>;
+  const t = samples.map((x) => x.sheet).sort((a, b) => a - b);
+  const f = (v: number) => v.toFixed(1).padStart(7);
+  console.log(
+    `${'(floor: bare page, one SVG group moved)'.padEnd(44)} ${'1'.padStart(5)}  ${f(quantile(t, 0.5))} ${f(quantile(t, 0.95))}`,
+  );
+}
+
 async function main() {
   let stop = () => {};
   if (DEV) {
@@ -346,6 +375,9 @@ async function main() {
     console.log(
       `${'sheet'.padEnd(44)} ${'elems'.padStart(5)}  ${'moved p50'.padStart(7)} ${'p95'.padStart(7)}   ${'solved p50'.padStart(7)} ${'p95'.padStart(7)}`,
     );
+    const bare = await context.newPage();
+    await measureFloor(bare);
+    await bare.close();
     // BENCH_SHEETS=generated (or a demo title's first word) limits the run to some sheets.
     const only = process.env.BENCH_SHEETS?.toLowerCase();
     for (const example of EXAMPLES.filter((e) => !only || e.title.toLowerCase().includes(only))) {
