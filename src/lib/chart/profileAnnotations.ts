@@ -183,6 +183,7 @@ export function npshNotes(
       anchorY,
       x: left,
       y,
+      leaderY: y - NOTE_ASCENT < anchorY ? y + NOTE_DESCENT - 2 : y - 9,
       lines: n.lines,
       short: n.p.npshAvailable < n.p.npshRequired,
     };

@@ -172,7 +172,7 @@ function chart(g: ProfileGeometry): string {
     const ink = n.short ? PROFILE_INK.stop.ink : PROFILE_INK.text;
     out.push(
       `<g data-part="npsh" fill="${ink}" ${HALO}>`,
-      `<line x1="${f(n.anchorX)}" y1="${f(n.anchorY)}" x2="${f(n.x + 2)}" y2="${f(n.y - 9)}" stroke="${PROFILE_INK.muted}" stroke-width="0.8"/>`,
+      `<line x1="${f(n.anchorX)}" y1="${f(n.anchorY)}" x2="${f(n.x + 2)}" y2="${f(n.leaderY)}" stroke="${PROFILE_INK.muted}" stroke-width="0.8"/>`,
       `<text x="${f(n.x)}" y="${f(n.y)}">${escapeXml(n.lines[0])}</text>`,
       `<text x="${f(n.x)}" y="${f(n.y + 13)}">${escapeXml(n.lines[1])}</text>`,
       `</g>`,

@@ -80,6 +80,8 @@ export interface NpshNote {
   /** Left edge and baseline of the first line of text, px. */
   x: number;
   y: number;
+  /** Where the leader from the suction meets the note, px: its top, or its foot when above. */
+  leaderY: number;
   lines: [string, string];
   /** NPSHa below NPSHr. */
   short: boolean;
