@@ -39,15 +39,30 @@ const END_KINDS: NodeKind[] = [
   'junction',
 ];
 
-/** Nodes for the start and end pickers, vessels and boundaries first, then by name. */
+/** The last list built, keyed on the ids, names and kinds it was built from. */
+let lastOptions: { key: string; options: NodeOption[] } | null = null;
+
+/**
+ * Nodes for the start and end pickers, vessels and boundaries first, then by name. Moving a
+ * node changes only its position, so the sorted list is kept and handed back (same array)
+ * until an id, name or kind changes.
+ */
 export function nodeOptions(doc: HeadrouteDocument): NodeOption[] {
-  return Object.values(doc.nodes)
+  const nodes = Object.values(doc.nodes);
+  let key = '';
+  for (const n of nodes) key += `${n.id}\u0000${n.name}\u0000${n.kind}\u0001`;
+  if (lastOptions && lastOptions.key === key) return lastOptions.options;
+  // One collator for the whole sort: the same order as localeCompare with these options,
+  // without building a collator per comparison.
+  const collator = new Intl.Collator(undefined, { numeric: true });
+  const options = nodes
     .map((n) => ({ id: n.id, label: n.name || n.id, kind: n.kind }))
     .sort(
       (a, b) =>
-        END_KINDS.indexOf(a.kind) - END_KINDS.indexOf(b.kind) ||
-        a.label.localeCompare(b.label, undefined, { numeric: true }),
+        END_KINDS.indexOf(a.kind) - END_KINDS.indexOf(b.kind) || collator.compare(a.label, b.label),
     );
+  lastOptions = { key, options };
+  return options;
 }
 
 function nameOf(doc: HeadrouteDocument, id: Id): string {
