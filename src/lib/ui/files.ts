@@ -59,10 +59,19 @@ export async function openFile(file: File): Promise<boolean> {
   return loadProjectText(await file.text(), file.name);
 }
 
-/** Open one of the demo projects in static/examples. */
-export async function openDemo(example: ExampleProject, ask = true): Promise<boolean> {
+/**
+ * Open one of the demo projects in static/examples. With `unlessChangedSince` (a document
+ * revision), the demo is not opened if the user changed or replaced the document while it
+ * was being fetched: their work wins.
+ */
+export async function openDemo(
+  example: ExampleProject,
+  ask = true,
+  unlessChangedSince?: number,
+): Promise<boolean> {
   if (ask && !mayDiscard()) return false;
   const parsed = await loadExample(example, undefined, base);
+  if (unlessChangedSince !== undefined && editor.revision !== unlessChangedSince) return false;
   if (!parsed.ok) {
     editor.say(parsed.errors.map((e) => e.message).join('; '), 'error');
     return false;
@@ -97,8 +106,11 @@ export interface RestoreNotice {
  * asks), otherwise open the first demo. Returns a notice for the user, or null.
  */
 export async function startUp(firstDemo: ExampleProject): Promise<RestoreNotice | null> {
+  const startRevision = editor.revision;
   // An unreadable IndexedDB (private mode, blocked storage) simply means nothing to restore.
   const restored = await loadAutosave().catch(() => null);
+  // The user may already have pressed New or opened a file: never replace what they started.
+  if (editor.revision !== startRevision) return null;
   if (restored?.ok) {
     editor.load(restored.document, null, true);
     const when = restored.savedAt ? new Date(restored.savedAt).toLocaleString() : 'earlier';
@@ -107,7 +119,7 @@ export async function startUp(firstDemo: ExampleProject): Promise<RestoreNotice 
       level: 'info',
     };
   }
-  await openDemo(firstDemo, false);
+  await openDemo(firstDemo, false, startRevision);
   if (restored && !restored.ok) {
     return {
       text: `The autosaved copy could not be read (${restored.errors[0]?.message ?? 'unknown problem'}); it is kept until you clear it.`,
