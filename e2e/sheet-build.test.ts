@@ -101,3 +101,78 @@ test('a route drawn with the mouse solves on screen as the command line solves i
   );
   expect(shownFlow).toBeGreaterThan(0);
 });
+
+/** Drag a part onto the sheet and return the id of the node it made. */
+async function place(page: Page, part: string, dx: number, dy: number): Promise<string> {
+  const idsNow = () =>
+    page.locator('g.node').evaluateAll((els) => els.map((e) => e.getAttribute('data-node-id')!));
+  const before = new Set(await idsNow());
+  // the lower parts of the shelf may be scrolled out of view
+  await page.locator(`[data-part="${part}"]`).scrollIntoViewIfNeeded();
+  await dragPart(page, part, dx, dy);
+  await expect.poll(async () => (await idsNow()).length).toBe(before.size + 1);
+  return (await idsNow()).find((id) => !before.has(id))!;
+}
+
+test("demo 1's route drawn with the mouse: tank, strainer, pump, check valve, control valve, rack high point, closed receiver", async ({
+  page,
+}) => {
+  await page.goto('/');
+  await expect(page.locator('g.node')).not.toHaveCount(0, { timeout: 30_000 });
+  await page.getByRole('button', { name: /Project/ }).click();
+  await page.getByRole('menuitem', { name: 'New' }).click();
+  await expect(page.locator('g.node')).toHaveCount(0);
+
+  const tank = await place(page, 'vessel-open', 90, 220);
+  const strainer = await place(page, 'strainer', 220, 280);
+  const pump = await place(page, 'pump', 330, 280);
+  const check = await place(page, 'swing-check-valve', 440, 280);
+  const valve = await place(page, 'control-valve', 550, 280);
+  const high = await place(page, 'waypoint', 660, 110);
+  const receiver = await place(page, 'vessel-closed', 790, 170);
+  await join(page, [tank, 'N1'], [strainer, 'in']);
+  await join(page, [strainer, 'out'], [pump, 'suction']);
+  await join(page, [pump, 'discharge'], [check, 'in']);
+  await join(page, [check, 'out'], [valve, 'in']);
+  await join(page, [valve, 'out'], [high, 'in']);
+  await join(page, [high, 'out'], [receiver, 'N1']);
+  await expect(page.locator('g.pipe')).toHaveCount(6);
+
+  const details = page.getByRole('region', { name: 'Details' });
+  const select = (id: string) => page.locator(`g.node[data-node-id="${id}"] .symbol`).click();
+  // the rack high point 12 m up, the receiver 8 m up with 2 barg in its gas space
+  await select(high);
+  await type(details.getByLabel('Elevation'), '12 m');
+  await select(receiver);
+  await type(details.getByLabel('Bottom elevation'), '8 m');
+  await type(details.getByLabel('Gas pressure'), '2 barg');
+  // warm water, as in the demo
+  await page.locator('svg.sheet').click({ position: { x: 20, y: 20 } });
+  await type(details.getByLabel('Temperature'), '60 °C');
+
+  await page.locator(`g.node[data-node-id="${pump}"] .symbol`).hover();
+  const readout = page.getByRole('tooltip');
+  await expect(readout).toBeVisible();
+  const value = (label: string) =>
+    readout.locator('dt', { hasText: new RegExp(`^${label}$`) }).locator('+ dd');
+  const shownFlow = number(await value('Flow').textContent());
+  const shownNpsha = number(await value('NPSHa').textContent());
+  await page.screenshot({ path: 'e2e/screenshots/build-demo1-route.png' });
+
+  const download = page.waitForEvent('download');
+  await page.keyboard.press('Control+s');
+  const path = await (await download).path();
+  const cli = JSON.parse(
+    execFileSync('node', ['bin/headroute.js', 'solve', path, '--format', 'json'], {
+      encoding: 'utf8',
+    }),
+  );
+  expect(cli.converged).toBe(true);
+  const solved = cli.pumps.find((p: { id: string }) => p.id === pump);
+  const flowM3h = solved.flow * 3600;
+  expect(flowM3h).toBeGreaterThan(0);
+  expect(Math.abs(shownFlow - flowM3h)).toBeLessThanOrEqual(0.005 * flowM3h + 1e-9);
+  expect(Math.abs(shownNpsha - solved.npshAvailable)).toBeLessThanOrEqual(
+    0.005 * solved.npshAvailable + 1e-9,
+  );
+});
