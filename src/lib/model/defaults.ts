@@ -45,7 +45,7 @@ export function defaultSettings(): ProjectSettings {
   };
 }
 
-/** A new, empty document. */
+/** A new, empty project document */
 export function createDocument(name: string): HeadrouteDocument {
   return {
     format: 'headroute',

@@ -23,7 +23,7 @@ interface Gesture {
   inverse: Patch[][];
 }
 
-/** Undo/redo history of one open document. */
+/** Undo/redo history of the open project document */
 export class History {
   #doc: HeadrouteDocument;
   #revision = 0;

@@ -22,7 +22,7 @@ export const ID_PREFIX: Record<NodeKind | 'pipe' | 'case' | 'route', string> = {
   route: 'R',
 };
 
-/** True when `id` is used by any node, pipe, case or route of the document. */
+/** True when `id` is used by any node, pipe, case or route of the document */
 export function idInUse(doc: HeadrouteDocument, id: Id): boolean {
   return (
     Object.hasOwn(doc.nodes, id) ||

@@ -177,7 +177,7 @@ export function checkIntegrity(doc: HeadrouteDocument): DocumentProblem[] {
   return problems;
 }
 
-/** True when `id` is free in the document. */
+/** True when `id` is free in the document */
 export function isFreeId(doc: HeadrouteDocument, id: Id): boolean {
   return !idInUse(doc, id);
 }

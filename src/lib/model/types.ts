@@ -6,7 +6,7 @@
  * atmospheric pressure). Plan positions (x, y) are sheet units and never enter the physics.
  */
 
-/** Identifier of a node, pipe, case or route; unique within its document. */
+/** Identifier of a node, pipe, case or route; unique within its document */
 export type Id = string;
 
 /** Liquid chosen for the project: one from the library, or defined by the user. */
@@ -242,7 +242,7 @@ export interface ProjectSettings {
   velocityGuidance: VelocityGuidance;
 }
 
-/** Overrides a case applies on top of the base document. Absent means "as the base". */
+/** Overrides a case applies on top of the base document; absent means "as the base". */
 export interface CaseOverrides {
   liquid?: LiquidChoice;
   temperature?: number;
@@ -269,7 +269,7 @@ export interface Route {
   nodes: Id[];
 }
 
-/** The project document. */
+/** The project document: what a `*.headroute.json` file holds */
 export interface HeadrouteDocument {
   format: 'headroute';
   version: number;

@@ -2,9 +2,9 @@
 
 /** Largest project file accepted, characters of JSON text (about 20 MB). */
 export const MAX_FILE_CHARS = 20 * 1024 * 1024;
-/** Most nodes plus pipes in one document. */
+/** Most nodes plus pipes per document (project file limit) */
 export const MAX_ELEMENTS = 20_000;
-/** Most cases, and most stored routes, in one document. */
+/** Most cases, and most stored routes, per document (project file limit) */
 export const MAX_CASES = 500;
 export const MAX_ROUTES = 500;
 /** Longest name (document, node, pipe, case, route), characters. */

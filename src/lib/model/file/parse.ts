@@ -2,7 +2,8 @@
  * Reading a project file. Nothing from the file is trusted until it has passed every check:
  * size, JSON syntax, forbidden keys and nesting depth, format tag and version, migrations,
  * the schema, and the links between records. A file that fails returns messages; it never throws
- * and never yields a partial document.
+ * and never yields a partial document:
+ * either the whole project or nothing.
  */
 import type { DocumentProblem } from '../integrity';
 import { joinPath } from '../integrity';

@@ -8,7 +8,7 @@ import { DocumentSchema } from './schema';
 /** Most problems reported for one file (the rest are summarised in one line). */
 export const MAX_REPORTED_PROBLEMS = 50;
 
-/** Outcome of validating a document. */
+/** Outcome of validating a document against the schema */
 export type ValidationResult =
   { ok: true; document: HeadrouteDocument } | { ok: false; errors: DocumentProblem[] };
 

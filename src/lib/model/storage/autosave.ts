@@ -1,7 +1,8 @@
 /**
  * Autosave of the open project to IndexedDB (through idb-keyval), and its restore on the next
  * visit. The saved copy is the project-file text, so restoring goes through the same validated
- * path as opening a file: a damaged autosave gives messages, never a broken document.
+ * path as opening a file: a damaged autosave gives messages, never a broken document
+ * in the editor.
  */
 import { createStore, del, get, set, type UseStore } from 'idb-keyval';
 import type { DocumentProblem } from '../integrity';
@@ -79,7 +80,7 @@ export async function clearAutosave(): Promise<void> {
   if (s) await del(KEY, s);
 }
 
-/** A throttled autosaver: at most one save per `delayMs`, always of the latest document. */
+/** A throttled autosaver: at most one save per `delayMs`, always of the latest document */
 export interface Autosaver {
   /** Note a new document; it is saved within `delayMs`. */
   schedule(doc: HeadrouteDocument): void;

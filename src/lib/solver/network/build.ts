@@ -47,7 +47,7 @@ export interface GraphPipe {
   elevationTo: number;
 }
 
-/** The hydraulic graph of a document. */
+/** The hydraulic graph built from a project document */
 export interface HydraulicGraph {
   nodeCount: number;
   /** 1 for fixed-head nodes. */
