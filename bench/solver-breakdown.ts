@@ -33,9 +33,9 @@ for (let r = 0; r < runs + 5; r++) {
   t.push(performance.now());
   const outcome = gradientSolve(graph, parts.activeNode, parts.activeLink);
   t.push(performance.now());
-  const results = elementResults(working, graph, outcome, parts.activeLink, fluid);
+  const { records, indexed } = elementResults(graph, outcome, parts.activeLink, fluid);
   t.push(performance.now());
-  sheetFindings(working, working.settings, graph, results, fluid);
+  sheetFindings(working, working.settings, graph, records, indexed, fluid);
   t.push(performance.now());
   solve(doc);
   t.push(performance.now());

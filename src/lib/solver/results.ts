@@ -3,15 +3,15 @@
  * valves. Graph heads are total heads (EGL); the HGL at a port is EGL − v²/2g with the velocity
  * of the pipe on that port.
  */
-import type { HeadrouteDocument, Id, SheetNode } from '../model/types';
-import { portsOf, portElevation } from '../model/ports';
+import type { Id, SheetNode } from '../model/types';
 import { chokedPressureDrop } from '../physics/controlValve';
 import { LAMINAR_LIMIT_REYNOLDS } from '../physics/friction';
 import { bestEfficiencyFlow, pumpEfficiency, pumpNpshRequired, shaftPower } from '../physics/pump';
 import type { SolveFluid } from './fluid';
-import { portKey, type GraphPipe, type HydraulicGraph } from './network/build';
+import type { HydraulicGraph } from './network/build';
 import type { GgaOutcome } from './network/gga';
 import { GRAVITY } from './network/laws';
+import { portElevationAt, portIndex, portName } from './network/portSlots';
 import type { ControlValveResult, NodeResult, PipeResult, PortResult, PumpResult } from './types';
 
 /** Velocity below which a pipe is reported as carrying no flow, m/s. */
@@ -32,57 +32,61 @@ export interface ElementResults {
   controlValves: Record<Id, ControlValveResult>;
 }
 
+/** The same results by position, for the findings: pipes as graph.pipeList, nodes as graph.sheetNodes. */
+export interface IndexedResults {
+  pipes: PipeResult[];
+  /** Undefined for a sheet node left out of the solve. */
+  nodes: Array<NodeResult | undefined>;
+}
+
 function clean(value: number): number {
   return Number.isFinite(value) ? value : 0;
 }
 
 /** Builds every element's results; all numbers are finite. */
 export function elementResults(
-  doc: HeadrouteDocument,
   graph: HydraulicGraph,
   outcome: GgaOutcome,
   activeLink: Uint8Array,
   fluid: SolveFluid,
-): ElementResults {
+): { records: ElementResults; indexed: IndexedResults } {
   const g2 = 2 * GRAVITY;
   const rhoG = fluid.density * GRAVITY;
   const { heads, flows } = outcome;
+  const fixed = graph.fixed;
   const pipes: Record<Id, PipeResult> = {};
+  const pipeList = graph.pipeList;
+  const nPipes = pipeList.length;
+  const pipeResults: PipeResult[] = new Array<PipeResult>(nPipes);
+  /** Each pipe's result flow, speed and end total heads, for the ports on it. */
+  const pipeFlow = new Float64Array(nPipes);
+  const pipeSpeed = new Float64Array(nPipes);
+  const pipeTotalFrom = new Float64Array(nPipes);
+  const pipeTotalTo = new Float64Array(nPipes);
 
-  /** EGL at a pipe's end, m: the graph head, or for an end on a vessel/boundary the fixed head less the entrance loss / plus the exit loss. */
-  const endTotalHead = (gp: GraphPipe, end: 'from' | 'to'): number => {
-    const link = graph.links[gp.link];
-    const node = end === 'from' ? link.from : link.to;
-    const head = heads[node];
-    if (!graph.fixed[node]) return head;
-    const q = flows[gp.link];
-    const v = q / gp.law.area;
-    const vh = (v * v) / g2;
-    const ref = end === 'from' ? gp.pipe.from : gp.pipe.to;
-    const sheetNode = doc.nodes[ref.node];
-    let entrance = 0;
-    let exit = 1;
-    if (sheetNode.kind === 'vessel') {
-      const nozzle = sheetNode.nozzles.find((n) => n.id === ref.port);
-      entrance = nozzle?.entranceK ?? 0;
-      exit = nozzle?.exitK ?? 1;
-    }
-    const leaving = end === 'from' ? q >= 0 : q <= 0;
-    return leaving ? head - entrance * vh : head + exit * vh;
-  };
-
-  for (const [id, gp] of graph.pipes) {
-    const active = activeLink[gp.link] === 1;
-    const q = active ? flows[gp.link] : 0;
+  for (let p = 0; p < nPipes; p++) {
+    const gp = pipeList[p];
+    const k = gp.link;
+    const active = activeLink[k] === 1;
+    const q = active ? flows[k] : 0;
     const law = gp.law;
     const v = q / law.area;
     const re = law.reynolds(q);
     const noFlow = Math.abs(v) < NO_FLOW_VELOCITY;
     const friction = re > 0 ? law.frictionFactor(q) : null;
     const vh = (v * v) / g2;
-    const totalFrom = active ? endTotalHead(gp, 'from') : 0;
-    const totalTo = active ? endTotalHead(gp, 'to') : 0;
-    pipes[id] = {
+    let totalFrom = 0;
+    let totalTo = 0;
+    if (active) {
+      // EGL at a pipe's end: the graph head, or at a vessel/boundary the fixed head less the
+      // entrance loss (liquid leaving it) or plus the exit loss (liquid arriving).
+      const link = graph.links[k];
+      totalFrom = heads[link.from];
+      if (fixed[link.from]) totalFrom += q >= 0 ? -gp.entranceFrom * vh : gp.exitFrom * vh;
+      totalTo = heads[link.to];
+      if (fixed[link.to]) totalTo += q <= 0 ? -gp.entranceTo * vh : gp.exitTo * vh;
+    }
+    const result: PipeResult = {
       flow: clean(q),
       velocity: clean(v),
       reynolds: clean(re),
@@ -102,32 +106,36 @@ export function elementResults(
       elevationFrom: gp.elevationFrom,
       elevationTo: gp.elevationTo,
     };
+    pipes[gp.pipe.id] = result;
+    pipeResults[p] = result;
+    pipeFlow[p] = result.flow;
+    pipeSpeed[p] = Math.abs(result.velocity);
+    pipeTotalFrom[p] = result.totalHeadFrom!;
+    pipeTotalTo[p] = result.totalHeadTo!;
   }
 
-  const portResult = (node: SheetNode, port: string): PortResult => {
-    const elevation = portElevation(doc, { node: node.id, port });
-    const key = portKey(node.id, port);
-    const graphNode = graph.portNode.get(key);
-    const attached = graph.portPipes.get(key) ?? [];
+  const { portPipeStart, portPipeList, portNode } = graph;
+  const portResult = (node: SheetNode, slot: number, local: number): PortResult => {
+    const elevation = portElevationAt(node, local);
+    const graphNode = portNode[slot];
     // The pipe carrying the most flow sets the port's velocity (a port normally has one pipe).
     // Flows equal to rounding (a junction joining two pipes in series) keep the first pipe, so
     // the choice does not hang on the last bit of the iteration.
-    let best: GraphPipe | null = null;
-    for (const gp of attached) {
-      if (best === null) best = gp;
+    let best = -1;
+    for (let e = portPipeStart[slot]; e < portPipeStart[slot + 1]; e++) {
+      const p = portPipeList[e];
+      if (best < 0) best = p;
       else {
-        const q = Math.abs(pipes[gp.pipe.id].flow);
-        const qBest = Math.abs(pipes[best.pipe.id].flow);
-        if (q - qBest > 1e-9 * qBest + 1e-15) best = gp;
+        const q = Math.abs(pipeFlow[p]);
+        const qBest = Math.abs(pipeFlow[best]);
+        if (q - qBest > 1e-9 * qBest + 1e-15) best = p;
       }
     }
-    let total = graphNode === undefined ? 0 : heads[graphNode];
+    let total = graphNode < 0 ? 0 : heads[graphNode];
     let velocity = 0;
-    if (best) {
-      const r = pipes[best.pipe.id];
-      velocity = Math.abs(r.velocity);
-      const atFrom = best.pipe.from.node === node.id && best.pipe.from.port === port;
-      total = atFrom ? r.totalHeadFrom! : r.totalHeadTo!;
+    if (best >= 0) {
+      velocity = pipeSpeed[best];
+      total = pipeList[best].fromSlot === slot ? pipeTotalFrom[best] : pipeTotalTo[best];
     }
     const head = total - (velocity * velocity) / g2;
     const pressureGauge = rhoG * (head - elevation);
@@ -144,15 +152,23 @@ export function elementResults(
   const nodes: Record<Id, NodeResult> = {};
   const pumps: Record<Id, PumpResult> = {};
   const controlValves: Record<Id, ControlValveResult> = {};
-  for (const node of graph.sheetNodes) {
-    if (!graph.portNode.has(portKey(node.id, portsOf(node)[0] ?? ''))) {
-      if (node.kind !== 'vessel' || node.nozzles.length > 0) continue;
-    }
+  const sheetNodes = graph.sheetNodes;
+  const nodeResults = new Array<NodeResult | undefined>(sheetNodes.length);
+  for (let i = 0; i < sheetNodes.length; i++) {
+    const node = sheetNodes[i];
+    // A node left out of the solve has no result, but a vessel without nozzles still gets one.
+    if (!graph.usable[i] && (node.kind !== 'vessel' || node.nozzles.length > 0)) continue;
     const ports: Record<string, PortResult> = {};
-    for (const port of portsOf(node)) ports[port] = portResult(node, port);
+    const start = graph.portStart[i];
+    const count = graph.portStart[i + 1] - start;
+    for (let local = 0; local < count; local++) {
+      // A repeated nozzle id names its first nozzle, whose pipes are its pipes.
+      const at = node.kind === 'vessel' ? portIndex(node, portName(node, local)) : local;
+      ports[portName(node, local)] = portResult(node, start + at, at);
+    }
     const result: NodeResult = { ports };
-    const k = graph.nodeLink.get(node.id);
-    if (k !== undefined) {
+    const k = graph.nodeLink[i];
+    if (k >= 0) {
       const link = graph.links[k];
       const q = activeLink[k] ? flows[k] : 0;
       result.flow = clean(q);
@@ -187,8 +203,12 @@ export function elementResults(
       }
     }
     nodes[node.id] = result;
+    nodeResults[i] = result;
   }
-  return { pipes, nodes, pumps, controlValves };
+  return {
+    records: { pipes, nodes, pumps, controlValves },
+    indexed: { pipes: pipeResults, nodes: nodeResults },
+  };
 }
 
 function pumpResult(

@@ -74,7 +74,7 @@ export function solve(doc: HeadrouteDocument, caseId?: Id | null): SolveResult {
     const graph = buildGraph(working, fluid);
     const parts = activeParts(working, graph);
     const outcome = gradientSolve(graph, parts.activeNode, parts.activeLink);
-    const results = elementResults(working, graph, outcome, parts.activeLink, fluid);
+    const { records: results, indexed } = elementResults(graph, outcome, parts.activeLink, fluid);
     const nothingFixed = parts.findings.some((f) => f.code === 'no-fixed-head');
     const result: SolveResult = {
       ...base,
@@ -92,7 +92,9 @@ export function solve(doc: HeadrouteDocument, caseId?: Id | null): SolveResult {
         findings.noConvergence(outcome.iterations, outcome.residual, names, worst),
       );
     }
-    result.findings.push(...sheetFindings(working, working.settings, graph, results, fluid));
+    result.findings.push(
+      ...sheetFindings(working, working.settings, graph, results, indexed, fluid),
+    );
     return result;
   } catch (error) {
     // A defect, not an input problem: keep the app alive and say so.

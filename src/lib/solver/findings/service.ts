@@ -1,77 +1,85 @@
 /**
  * Which pipes are pump suction or discharge lines, for the velocity guidance.
  */
-import type { HeadrouteDocument, Id } from '../../model/types';
-import { portKey, type HydraulicGraph } from '../network/build';
-import type { ElementResults } from '../results';
+import type { HydraulicGraph } from '../network/build';
+import type { IndexedResults } from '../results';
 
-/** A pipe's service: on a pump's suction side, its discharge side, or neither. */
-export type PipeService = 'suction' | 'discharge' | 'other';
+/** A pipe's service, as `pipeService` codes it: neither suction nor discharge. */
+export const OTHER = 0;
+/** On a pump's suction side. */
+export const SUCTION = 1;
+/** On a pump's discharge side. */
+export const DISCHARGE = 2;
 
-const INLINE = new Set(['waypoint', 'fitting', 'control-valve']);
+/** Memo value of a pipe not walked yet (any other value: the end's port slot, or −1 for none). */
+const UNKNOWN = -2;
 
 /**
  * Classifies pipes by following the flow through inline elements (waypoints, fittings,
  * control valves): a pipe whose flow reaches a pump's suction port is a suction line; one fed
  * from a pump's discharge port is a discharge line. Junctions, vessels and boundaries end a walk.
+ * Returns a code (OTHER, SUCTION, DISCHARGE) for each pipe of graph.pipeList.
  */
-export function pipeService(
-  doc: HeadrouteDocument,
-  graph: HydraulicGraph,
-  results: ElementResults,
-): Map<Id, PipeService> {
-  const service = new Map<Id, PipeService>();
-  const otherPort = (kind: string, port: string) =>
-    kind === 'waypoint' ? (port === 'in' ? 'out' : 'in') : port === 'in' ? 'out' : 'in';
-
-  type End = { node: Id; port: string } | null;
-  const memo: Array<Map<Id, End>> = [new Map(), new Map()];
+export function pipeService(graph: HydraulicGraph, indexed: IndexedResults): Uint8Array {
+  const { pipeList, sheetNodes, slotOwner, portStart, portPipeStart, portPipeList } = graph;
+  const n = pipeList.length;
+  const service = new Uint8Array(n);
+  /** Port slot each walk ends on, with (index 0) and against (1) the flow; −1: no end. */
+  const memo = [new Int32Array(n).fill(UNKNOWN), new Int32Array(n).fill(UNKNOWN)];
+  /** Walk number that last passed each pipe (a loop of inline elements ends the walk). */
+  const seen = new Int32Array(n);
+  let walks = 0;
+  const chain: number[] = [];
 
   /**
-   * The port a line ends on, walking from a pipe with (+1) or against (−1) the flow; every pipe
-   * passed on the way gets the same answer, so the whole sheet costs O(pipes).
+   * The port slot a line ends on, walking from a pipe with (+1) or against (−1) the flow; every
+   * pipe passed on the way gets the same answer, so the whole sheet costs O(pipes).
    */
-  const walk = (start: Id, direction: 1 | -1): End => {
+  const walk = (start: number, direction: 1 | -1): number => {
     const known = memo[direction === 1 ? 0 : 1];
-    const chain: Id[] = [];
-    const seen = new Set<Id>();
-    let id = start;
-    let end: End = null;
+    const stamp = ++walks;
+    chain.length = 0;
+    let p = start;
+    let end = -1;
     for (;;) {
-      if (known.has(id)) {
-        end = known.get(id)!;
+      if (known[p] !== UNKNOWN) {
+        end = known[p];
         break;
       }
-      if (seen.has(id)) break;
-      seen.add(id);
-      chain.push(id);
-      const gp = graph.pipes.get(id)!;
-      const forward = (results.pipes[id]?.flow ?? 0) >= 0;
-      const ref = (direction === 1) === forward ? gp.pipe.to : gp.pipe.from;
-      const node = doc.nodes[ref.node];
-      if (!INLINE.has(node.kind)) {
-        end = ref;
+      if (seen[p] === stamp) break;
+      seen[p] = stamp;
+      chain.push(p);
+      const gp = pipeList[p];
+      const forward = indexed.pipes[p].flow >= 0;
+      const slot = (direction === 1) === forward ? gp.toSlot : gp.fromSlot;
+      const owner = slotOwner[slot];
+      const kind = sheetNodes[owner].kind;
+      if (kind !== 'waypoint' && kind !== 'fitting' && kind !== 'control-valve') {
+        end = slot;
         break;
       }
-      const next = graph.portPipes.get(portKey(node.id, otherPort(node.kind, ref.port)))?.[0];
-      if (!next) break;
-      id = next.pipe.id;
+      // The other port of a two-port inline element ('in' ↔ 'out').
+      const other = 2 * portStart[owner] + 1 - slot;
+      const e = portPipeStart[other];
+      if (e === portPipeStart[other + 1]) break;
+      p = portPipeList[e];
     }
-    for (const c of chain) known.set(c, end);
+    for (const c of chain) known[c] = end;
     return end;
   };
 
-  for (const id of graph.pipes.keys()) {
-    const down = walk(id, 1);
-    if (down && doc.nodes[down.node].kind === 'pump' && down.port === 'suction') {
-      service.set(id, 'suction');
+  /** True when the slot is the given port (0 suction, 1 discharge) of a pump. */
+  const isPumpPort = (slot: number, local: number): boolean =>
+    slot >= 0 &&
+    sheetNodes[slotOwner[slot]].kind === 'pump' &&
+    slot - portStart[slotOwner[slot]] === local;
+
+  for (let p = 0; p < n; p++) {
+    if (isPumpPort(walk(p, 1), 0)) {
+      service[p] = SUCTION;
       continue;
     }
-    const up = walk(id, -1);
-    service.set(
-      id,
-      up && doc.nodes[up.node].kind === 'pump' && up.port === 'discharge' ? 'discharge' : 'other',
-    );
+    service[p] = isPumpPort(walk(p, -1), 1) ? DISCHARGE : OTHER;
   }
   return service;
 }

@@ -8,10 +8,11 @@
 import type { HeadrouteDocument, Id, ProjectSettings } from '../../model/types';
 import type { SolveFluid } from '../fluid';
 import type { HydraulicGraph } from '../network/build';
-import type { ElementResults } from '../results';
+import { portName } from '../network/portSlots';
+import type { ElementResults, IndexedResults } from '../results';
 import type { Finding } from '../types';
 import { findings } from './catalogue';
-import { pipeService } from './service';
+import { DISCHARGE, pipeService, SUCTION } from './service';
 
 /** Best-efficiency band (fraction of BEP flow) outside which a pump gets a caution: 70–120 %, common practice. */
 export const BEP_BAND = { min: 0.7, max: 1.2 } as const;
@@ -22,6 +23,7 @@ export function sheetFindings(
   settings: ProjectSettings,
   graph: HydraulicGraph,
   results: ElementResults,
+  indexed: IndexedResults,
   fluid: SolveFluid,
 ): Finding[] {
   const out: Finding[] = [];
@@ -36,13 +38,22 @@ export function sheetFindings(
   }
 
   // Nodes: lowest port pressure against vapour pressure; a closed vessel's gas space too.
-  for (const node of graph.sheetNodes) {
-    const result = results.nodes[node.id];
+  const { portStart, portPipeStart } = graph;
+  for (let i = 0; i < graph.sheetNodes.length; i++) {
+    const node = graph.sheetNodes[i];
+    const result = indexed.nodes[i];
     if (!result) continue;
     let lowest: { p: number; port: string } | null = null;
-    for (const [port, r] of Object.entries(result.ports)) {
-      if (!graph.portPipes.has(`${node.id}\u0000${port}`) && node.kind !== 'vessel') continue;
-      if (lowest === null || r.pressureAbs < lowest.p) lowest = { p: r.pressureAbs, port };
+    if (node.kind === 'vessel') {
+      for (const [port, r] of Object.entries(result.ports))
+        if (lowest === null || r.pressureAbs < lowest.p) lowest = { p: r.pressureAbs, port };
+    } else {
+      for (let slot = portStart[i]; slot < portStart[i + 1]; slot++) {
+        if (portPipeStart[slot + 1] === portPipeStart[slot]) continue;
+        const port = portName(node, slot - portStart[i]);
+        const r = result.ports[port];
+        if (lowest === null || r.pressureAbs < lowest.p) lowest = { p: r.pressureAbs, port };
+      }
     }
     if (node.kind === 'vessel') {
       const surface = node.open ? pAtm : node.gasPressureAbs;
@@ -64,10 +75,12 @@ export function sheetFindings(
     }
   }
 
-  const service = pipeService(doc, graph, results);
+  const service = pipeService(graph, indexed);
   const guidance = settings.velocityGuidance;
-  for (const [id, gp] of graph.pipes) {
-    const r = results.pipes[id];
+  for (let p = 0; p < graph.pipeList.length; p++) {
+    const gp = graph.pipeList[p];
+    const id = gp.pipe.id;
+    const r = indexed.pipes[p];
     const name = gp.pipe.name;
     const ends = [
       { p: pAtm + rhoG * ((r.headFrom ?? 0) - gp.elevationFrom), label: 'start' },
@@ -84,12 +97,12 @@ export function sheetFindings(
 
     if (r.regime === 'no-flow') continue;
     const speed = Math.abs(r.velocity);
-    const kind = service.get(id) ?? 'other';
-    if (kind === 'suction' && speed > guidance.suctionMax)
+    const kind = service[p];
+    if (kind === SUCTION && speed > guidance.suctionMax)
       out.push(findings.velocityHigh(name, speed, guidance.suctionMax, true, id));
-    if (kind !== 'suction' && speed > guidance.dischargeMax)
+    if (kind !== SUCTION && speed > guidance.dischargeMax)
       out.push(findings.velocityHigh(name, speed, guidance.dischargeMax, false, id));
-    if (kind === 'discharge' && speed < guidance.dischargeMin)
+    if (kind === DISCHARGE && speed < guidance.dischargeMin)
       out.push(findings.velocityLow(name, speed, guidance.dischargeMin, id));
     if (r.regime === 'laminar') out.push(findings.laminarFlow(name, r.reynolds, id));
     if (r.regime === 'transitional') out.push(findings.transitionalFlow(name, r.reynolds, id));
@@ -103,12 +116,15 @@ export function sheetFindings(
         findings.controlValveChoked(doc.nodes[id].name, cv.pressureDrop, cv.chokedPressureDrop, id),
       );
   }
-  for (const [id, k] of graph.nodeLink) {
+  for (let i = 0; i < graph.sheetNodes.length; i++) {
+    const k = graph.nodeLink[i];
+    if (k < 0) continue;
     const info = graph.links[k].info;
     if (info?.kind !== 'fitting' || !info.nonReturn || info.closed) continue;
-    const flow = results.nodes[id]?.flow ?? 0;
-    if (isHeld(flow, results.nodes[id]?.headLoss ?? 0))
-      out.push(findings.nonReturnClosed(doc.nodes[id].name, id));
+    const node = graph.sheetNodes[i];
+    const flow = indexed.nodes[i]?.flow ?? 0;
+    if (isHeld(flow, indexed.nodes[i]?.headLoss ?? 0))
+      out.push(findings.nonReturnClosed(node.name, node.id));
   }
   return out;
 }
@@ -126,9 +142,13 @@ function pumpFindings(
 ): Finding[] {
   const out: Finding[] = [];
   const rule = settings.npshMargin;
+  const pumpLinks = new Map<Id, number>();
+  graph.sheetNodes.forEach((node, i) => {
+    if (node.kind === 'pump' && graph.nodeLink[i] >= 0) pumpLinks.set(node.id, graph.nodeLink[i]);
+  });
   for (const [id, pump] of Object.entries(results.pumps)) {
     const node = doc.nodes[id];
-    const k = graph.nodeLink.get(id as Id);
+    const k = pumpLinks.get(id);
     const info = k === undefined ? null : graph.links[k].info;
     if (info?.kind !== 'pump' || !info.running) continue;
     if (!info.duty && isHeld(pump.flow, -pump.head) && pump.flow <= 1e-9) {

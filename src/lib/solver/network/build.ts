@@ -13,14 +13,21 @@
  *   starts with that total head (no entrance loss), liquid delivered into it keeps that
  *   pressure at the pipe end (its velocity head is lost, exit K = 1).
  */
-import type { HeadrouteDocument, Id, Pipe, SheetNode } from '../../model/types';
-import { hasPort } from '../../model/ports';
+import type { HeadrouteDocument, Id, Pipe, PortRef, SheetNode } from '../../model/types';
 import { findPipeMaterial, DEFAULT_MATERIAL, PIPE_MATERIALS } from '../../physics/materials';
 import { catalogueInnerDiameter } from '../../physics/pipeCatalogue';
 import type { Finding } from '../types';
 import { findings } from '../findings/catalogue';
 import type { SolveFluid } from '../fluid';
 import { GRAVITY, PipeLaw, type LinkLaw } from './laws';
+import {
+  endCoefficients,
+  portCount,
+  portElevationAt,
+  portIndex,
+  portName,
+  portsNeedingPipe,
+} from './portSlots';
 import { twoPortLink, type TwoPortInfo } from './twoPort';
 
 /** A link of the hydraulic graph. */
@@ -45,6 +52,14 @@ export interface GraphPipe {
   law: PipeLaw;
   elevationFrom: number;
   elevationTo: number;
+  /** Port slots of the pipe's two ends (see portSlots.ts). */
+  fromSlot: number;
+  toSlot: number;
+  /** Entrance and exit K at each end on a vessel nozzle or a boundary (0 and 1 elsewhere; unused there). */
+  entranceFrom: number;
+  exitFrom: number;
+  entranceTo: number;
+  exitTo: number;
 }
 
 /** The hydraulic graph built from a project document */
@@ -55,28 +70,29 @@ export interface HydraulicGraph {
   /** Fixed total head, m, for fixed nodes (0 for free ones). */
   fixedHead: Float64Array;
   links: HydraulicLink[];
-  /** Graph node of each connected port, keyed by portKey. */
-  portNode: Map<string, number>;
-  /** Valid pipes by id. */
-  pipes: Map<Id, GraphPipe>;
-  /** Pipes at each port, keyed by portKey. */
-  portPipes: Map<string, GraphPipe[]>;
-  /** Link index of each two-port sheet node. */
-  nodeLink: Map<Id, number>;
-  /** Sheet elements touching each graph node (for naming cut-off parts). */
-  nodeElements: Id[][];
   /** The document's sheet nodes in document order (Object.values once per solve). */
   sheetNodes: SheetNode[];
+  /** 1 for each sheet node (by index in sheetNodes) that takes part in the graph. */
+  usable: Uint8Array;
+  /**
+   * First port slot of each sheet node (length sheetNodes.length + 1): node i's ports, in
+   * model/ports `portsOf` order, take the slots portStart[i] … portStart[i + 1] − 1.
+   */
+  portStart: Int32Array;
+  /** Sheet node (index) owning each port slot. */
+  slotOwner: Int32Array;
+  /** Graph node of each port slot, −1 where the sheet node is left out of the solve. */
+  portNode: Int32Array;
+  /** Pipes at each port slot: indices into `pipeList`, from portPipeStart[s] to portPipeStart[s + 1]. */
+  portPipeStart: Int32Array;
+  portPipeList: Int32Array;
+  /** Valid pipes in document order. */
+  pipeList: GraphPipe[];
+  /** Link index of each sheet node (by index) that is a two-port element, −1 otherwise. */
+  nodeLink: Int32Array;
+  /** Sheet node (index) each graph node belongs to (for naming cut-off parts). */
+  nodeOwner: Int32Array;
   findings: Finding[];
-}
-
-/** Key of a port in the graph's maps. */
-export function portKey(node: Id, port: string): string {
-  return `${node}\u0000${port}`;
-}
-
-function getNode(doc: HeadrouteDocument, id: Id): SheetNode | undefined {
-  return Object.hasOwn(doc.nodes, id) ? doc.nodes[id] : undefined;
 }
 
 function pipeDiameter(pipe: Pipe, cache: Map<string, number | undefined>): number | undefined {
@@ -92,46 +108,62 @@ function pipeRoughness(pipe: Pipe): number {
   return (findPipeMaterial(pipe.material) ?? PIPE_MATERIALS[DEFAULT_MATERIAL]).roughness;
 }
 
-/** Entrance and exit K at a pipe end on a vessel nozzle or a boundary; null elsewhere. */
-function endCoefficients(node: SheetNode, port: string): { entrance: number; exit: number } | null {
-  if (node.kind === 'boundary') return { entrance: 0, exit: 1 };
-  if (node.kind === 'vessel') {
-    const nozzle = node.nozzles.find((n) => n.id === port);
-    return nozzle ? { entrance: nozzle.entranceK, exit: nozzle.exitK } : null;
-  }
-  return null;
-}
-
-/** Elevation of an existing port: a vessel nozzle's own elevation, otherwise the node's z. */
-function elevationOf(node: SheetNode, port: string): number {
-  if (node.kind === 'vessel') return node.nozzles.find((n) => n.id === port)!.z;
-  return node.z;
-}
-
 function finite(...values: number[]): boolean {
   return values.every((v) => Number.isFinite(v));
+}
+
+/** A pipe end that names a node and port of the sheet, or the reason it does not. */
+function endSlot(
+  graph: { sheetNodes: SheetNode[]; portStart: Int32Array },
+  nodeIndex: Map<Id, number>,
+  ref: PortRef,
+): { node: SheetNode | undefined; index: number; slot: number } {
+  const index = nodeIndex.get(ref.node);
+  if (index === undefined) return { node: undefined, index: -1, slot: -1 };
+  const node = graph.sheetNodes[index];
+  const local = portIndex(node, ref.port);
+  return { node, index, slot: local < 0 ? -1 : graph.portStart[index] + local };
 }
 
 /** Builds the hydraulic graph; problems with the input come back as findings. */
 export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): HydraulicGraph {
   const out: Finding[] = [];
   const rhoG = fluid.density * GRAVITY;
-  const fixedList: number[] = [];
-  const headList: number[] = [];
-  const nodeElements: Id[][] = [];
-  const portNode = new Map<string, number>();
+  const sheetNodes = Object.values(doc.nodes);
+  const nSheet = sheetNodes.length;
+  const nodeIndex = new Map<Id, number>();
+  const portStart = new Int32Array(nSheet + 1);
+  for (let i = 0; i < nSheet; i++) {
+    const node = sheetNodes[i];
+    // Object.values lists each key once, so a repeated id can only come from a node whose id
+    // differs from its key; the first keeps the id, as a lookup by key would find one node.
+    if (!nodeIndex.has(node.id)) nodeIndex.set(node.id, i);
+    portStart[i + 1] = portStart[i] + portCount(node);
+  }
+  const nSlots = portStart[nSheet];
+  const slotOwner = new Int32Array(nSlots);
+  for (let i = 0; i < nSheet; i++) slotOwner.fill(i, portStart[i], portStart[i + 1]);
+  const portNode = new Int32Array(nSlots).fill(-1);
+  const usable = new Uint8Array(nSheet);
+  // Graph nodes: at most one per port slot plus one per vessel.
+  const capacity = nSlots + nSheet;
+  const fixed = new Uint8Array(capacity);
+  const fixedHead = new Float64Array(capacity);
+  const nodeOwner = new Int32Array(capacity);
   let nodeCount = 0;
-  const newNode = (element: Id, head: number | null): number => {
+  const newNode = (owner: number, head: number | null): number => {
     const index = nodeCount++;
-    fixedList.push(head === null ? 0 : 1);
-    headList.push(head ?? 0);
-    nodeElements.push([element]);
+    if (head !== null) {
+      fixed[index] = 1;
+      fixedHead[index] = head;
+    }
+    nodeOwner[index] = owner;
     return index;
   };
 
-  const usable = new Set<Id>();
-  const sheetNodes = Object.values(doc.nodes);
-  for (const node of sheetNodes) {
+  for (let i = 0; i < nSheet; i++) {
+    const node = sheetNodes[i];
+    const s = portStart[i];
     if (!finite(node.z)) {
       out.push(
         findings.invalidInput(
@@ -156,8 +188,8 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
           );
           continue;
         }
-        const index = newNode(node.id, head);
-        for (const nozzle of node.nozzles) portNode.set(portKey(node.id, nozzle.id), index);
+        const index = newNode(i, head);
+        portNode.fill(index, s, portStart[i + 1]);
         break;
       }
       case 'boundary': {
@@ -172,51 +204,63 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
           );
           continue;
         }
-        portNode.set(portKey(node.id, 'p'), newNode(node.id, head));
+        portNode[s] = newNode(i, head);
         break;
       }
       case 'waypoint': {
-        const index = newNode(node.id, null);
-        portNode.set(portKey(node.id, 'in'), index);
-        portNode.set(portKey(node.id, 'out'), index);
+        const index = newNode(i, null);
+        portNode[s] = index;
+        portNode[s + 1] = index;
         break;
       }
       case 'junction':
-        portNode.set(portKey(node.id, 'hub'), newNode(node.id, null));
+        portNode[s] = newNode(i, null);
         break;
       case 'pump':
-        portNode.set(portKey(node.id, 'suction'), newNode(node.id, null));
-        portNode.set(portKey(node.id, 'discharge'), newNode(node.id, null));
-        break;
       case 'fitting':
       case 'control-valve':
-        portNode.set(portKey(node.id, 'in'), newNode(node.id, null));
-        portNode.set(portKey(node.id, 'out'), newNode(node.id, null));
+        portNode[s] = newNode(i, null);
+        portNode[s + 1] = newNode(i, null);
         break;
     }
-    usable.add(node.id);
+    usable[i] = 1;
   }
 
   const links: HydraulicLink[] = [];
-  const pipes = new Map<Id, GraphPipe>();
-  const portPipes = new Map<string, GraphPipe[]>();
+  const pipeList: GraphPipe[] = [];
   const boreCache = new Map<string, number | undefined>();
+  const shape = { sheetNodes, portStart };
   for (const pipe of Object.values(doc.pipes)) {
-    const fromNode = getNode(doc, pipe.from.node);
-    const toNode = getNode(doc, pipe.to.node);
+    const a = endSlot(shape, nodeIndex, pipe.from);
+    const b = endSlot(shape, nodeIndex, pipe.to);
     let broken = false;
-    for (const [node, ref, end] of [
-      [fromNode, pipe.from, 'from'],
-      [toNode, pipe.to, 'to'],
-    ] as const) {
-      if (!node || !hasPort(node, ref.port)) {
-        out.push(
-          findings.brokenConnection(pipe.name, end, node?.name ?? ref.node, ref.port, pipe.id),
-        );
-        broken = true;
-      } else if (!usable.has(node.id)) broken = true;
-    }
-    if (broken || !fromNode || !toNode) continue;
+    if (a.slot < 0) {
+      out.push(
+        findings.brokenConnection(
+          pipe.name,
+          'from',
+          a.node?.name ?? pipe.from.node,
+          pipe.from.port,
+          pipe.id,
+        ),
+      );
+      broken = true;
+    } else if (!usable[a.index]) broken = true;
+    if (b.slot < 0) {
+      out.push(
+        findings.brokenConnection(
+          pipe.name,
+          'to',
+          b.node?.name ?? pipe.to.node,
+          pipe.to.port,
+          pipe.id,
+        ),
+      );
+      broken = true;
+    } else if (!usable[b.index]) broken = true;
+    if (broken) continue;
+    const fromNode = a.node!;
+    const toNode = b.node!;
     const diameter = pipeDiameter(pipe, boreCache);
     const roughness = pipeRoughness(pipe);
     if (diameter === undefined || !(diameter > 0) || !Number.isFinite(diameter)) {
@@ -249,90 +293,102 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       );
       continue;
     }
-    const fromEnd = endCoefficients(fromNode, pipe.from.port);
-    const toEnd = endCoefficients(toNode, pipe.to.port);
+    const fromLocal = a.slot - portStart[a.index];
+    const toLocal = b.slot - portStart[b.index];
+    // Entrance/exit K at an end on a vessel nozzle or a boundary (a boundary: 0 and 1).
+    const fromEnd = endCoefficients(fromNode, fromLocal);
+    const toEnd = endCoefficients(toNode, toLocal);
     // Forward flow leaves at `from` (entrance) and arrives at `to` (exit); reverse the other way.
-    const kForward = (fromEnd?.entrance ?? 0) + (toEnd?.exit ?? 0);
-    const kReverse = (fromEnd?.exit ?? 0) + (toEnd?.entrance ?? 0);
+    const kForward = (fromEnd ? fromEnd.entranceK : 0) + (toEnd ? toEnd.exitK : 0);
+    const kReverse = (fromEnd ? fromEnd.exitK : 0) + (toEnd ? toEnd.entranceK : 0);
     const law = new PipeLaw(diameter, pipe.length, roughness / diameter, fluid, kForward, kReverse);
-    const fromKey = portKey(pipe.from.node, pipe.from.port);
-    const toKey = portKey(pipe.to.node, pipe.to.port);
-    const from = portNode.get(fromKey)!;
-    const to = portNode.get(toKey)!;
+    const from = portNode[a.slot];
+    const to = portNode[b.slot];
     const link = links.length;
     links.push({ element: pipe.id, kind: 'pipe', from, to, law, fixedFlow: 0, info: null });
-    const graphPipe: GraphPipe = {
+    pipeList.push({
       pipe,
       link,
       law,
-      // The ports were checked above, so this is portElevation (model/ports) without the checks.
-      elevationFrom: elevationOf(fromNode, pipe.from.port),
-      elevationTo: elevationOf(toNode, pipe.to.port),
-    };
-    pipes.set(pipe.id, graphPipe);
-    for (const key of [fromKey, toKey]) {
-      const list = portPipes.get(key);
-      if (list) list.push(graphPipe);
-      else portPipes.set(key, [graphPipe]);
-    }
-    nodeElements[from].push(pipe.id);
-    nodeElements[to].push(pipe.id);
+      elevationFrom: portElevationAt(fromNode, fromLocal),
+      elevationTo: portElevationAt(toNode, toLocal),
+      fromSlot: a.slot,
+      toSlot: b.slot,
+      entranceFrom: fromEnd ? fromEnd.entranceK : 0,
+      exitFrom: fromEnd ? fromEnd.exitK : 1,
+      entranceTo: toEnd ? toEnd.entranceK : 0,
+      exitTo: toEnd ? toEnd.exitK : 1,
+    });
   }
 
-  const nodeLink = new Map<Id, number>();
-  for (const node of sheetNodes) {
-    if (!usable.has(node.id)) continue;
-    for (const port of portsNeedingPipe(node)) {
-      if (!portPipes.has(portKey(node.id, port)))
-        out.push(findings.unconnectedPort(node.name, port, node.id));
+  // Pipes at each port slot, in document order (CSR).
+  const portPipeStart = new Int32Array(nSlots + 1);
+  for (const gp of pipeList) {
+    portPipeStart[gp.fromSlot + 1]++;
+    portPipeStart[gp.toSlot + 1]++;
+  }
+  for (let s = 0; s < nSlots; s++) portPipeStart[s + 1] += portPipeStart[s];
+  const portPipeList = new Int32Array(portPipeStart[nSlots]);
+  const cursor = portPipeStart.slice(0, nSlots);
+  for (let p = 0; p < pipeList.length; p++) {
+    const gp = pipeList[p];
+    portPipeList[cursor[gp.fromSlot]++] = p;
+    if (gp.toSlot !== gp.fromSlot) portPipeList[cursor[gp.toSlot]++] = p;
+  }
+  // A pipe with both ends on one port is listed once there (as a keyed list of pipes would
+  // list it twice; the results only read the first pipe and whether there is one).
+  const graph = { portPipeStart, portPipeList };
+
+  const nodeLink = new Int32Array(nSheet).fill(-1);
+  for (let i = 0; i < nSheet; i++) {
+    if (!usable[i]) continue;
+    const node = sheetNodes[i];
+    const s = portStart[i];
+    for (const local of portsNeedingPipe(node)) {
+      if (portPipeStart[s + local + 1] === portPipeStart[s + local])
+        out.push(findings.unconnectedPort(node.name, portName(node, local), node.id));
     }
     if (node.kind !== 'pump' && node.kind !== 'fitting' && node.kind !== 'control-valve') continue;
-    const [inPort, outPort] = node.kind === 'pump' ? ['suction', 'discharge'] : ['in', 'out'];
-    const inPipe = portPipes.get(portKey(node.id, inPort))?.[0];
-    const outPipe = portPipes.get(portKey(node.id, outPort))?.[0];
+    const inPipe = firstPipe(graph, pipeList, s);
+    const outPipe = firstPipe(graph, pipeList, s + 1);
     const made = twoPortLink(node, inPipe?.law.diameter, outPipe?.law.diameter, fluid, out);
-    const link: HydraulicLink = {
+    nodeLink[i] = links.length;
+    links.push({
       element: node.id,
       kind: node.kind,
-      from: portNode.get(portKey(node.id, inPort))!,
-      to: portNode.get(portKey(node.id, outPort))!,
+      from: portNode[s],
+      to: portNode[s + 1],
       law: made.law,
       fixedFlow: made.fixedFlow,
       info: made.info,
-    };
-    nodeLink.set(node.id, links.length);
-    links.push(link);
+    });
   }
 
   return {
     nodeCount,
-    fixed: Uint8Array.from(fixedList),
-    fixedHead: Float64Array.from(headList),
+    fixed: fixed.slice(0, nodeCount),
+    fixedHead: fixedHead.slice(0, nodeCount),
     links,
-    portNode,
-    pipes,
-    portPipes,
-    nodeLink,
-    nodeElements,
     sheetNodes,
+    usable,
+    portStart,
+    slotOwner,
+    portNode,
+    portPipeStart,
+    portPipeList,
+    pipeList,
+    nodeLink,
+    nodeOwner: nodeOwner.slice(0, nodeCount),
     findings: out,
   };
 }
 
-/** Ports that should have a pipe: both ports of two-port nodes, a junction's hub, a boundary's port. */
-function portsNeedingPipe(node: SheetNode): string[] {
-  switch (node.kind) {
-    case 'pump':
-      return ['suction', 'discharge'];
-    case 'fitting':
-    case 'control-valve':
-    case 'waypoint':
-      return ['in', 'out'];
-    case 'junction':
-      return ['hub'];
-    case 'boundary':
-      return ['p'];
-    case 'vessel':
-      return [];
-  }
+/** The first pipe at a port slot, if any. */
+export function firstPipe(
+  graph: Pick<HydraulicGraph, 'portPipeStart' | 'portPipeList'>,
+  pipeList: GraphPipe[],
+  slot: number,
+): GraphPipe | undefined {
+  const p = graph.portPipeStart[slot];
+  return p < graph.portPipeStart[slot + 1] ? pipeList[graph.portPipeList[p]] : undefined;
 }

@@ -22,6 +22,34 @@ function find(parent: Int32Array, i: number): number {
 }
 
 /**
+ * The sheet elements of each part without a fixed head, by the part's root: for each graph
+ * node in order, its sheet node and then the pipes on it in document order.
+ */
+function cutParts(
+  graph: HydraulicGraph,
+  parent: Int32Array,
+  activeNode: Uint8Array,
+): Map<number, Set<Id>> {
+  const n = graph.nodeCount;
+  const pipesAt: Id[][] = Array.from({ length: n }, () => []);
+  for (const gp of graph.pipeList) {
+    const link = graph.links[gp.link];
+    if (!activeNode[link.from]) pipesAt[link.from].push(gp.pipe.id);
+    if (!activeNode[link.to]) pipesAt[link.to].push(gp.pipe.id);
+  }
+  const cut = new Map<number, Set<Id>>();
+  for (let i = 0; i < n; i++) {
+    if (activeNode[i]) continue;
+    const root = find(parent, i);
+    const set = cut.get(root) ?? new Set<Id>();
+    set.add(graph.sheetNodes[graph.nodeOwner[i]].id);
+    for (const id of pipesAt[i]) set.add(id);
+    cut.set(root, set);
+  }
+  return cut;
+}
+
+/**
  * Splits the graph into connected parts (through links with a head-loss law, closed ones
  * included; a duty pump fixes a flow, not a head, so it does not join its two sides) and keeps
  * the parts that contain a fixed head. Each other part gives a 'cut-off' finding naming its
@@ -46,20 +74,16 @@ export function activeParts(doc: HeadrouteDocument, graph: HydraulicGraph): Acti
     }
   }
   const activeNode = new Uint8Array(n);
-  const cut = new Map<number, Set<Id>>();
+  let anyCut = false;
   for (let i = 0; i < n; i++) {
-    const root = find(parent, i);
-    if (rootHasFixed[root]) activeNode[i] = 1;
-    else {
-      const set = cut.get(root) ?? new Set<Id>();
-      for (const id of graph.nodeElements[i]) set.add(id);
-      cut.set(root, set);
-    }
+    if (rootHasFixed[find(parent, i)]) activeNode[i] = 1;
+    else anyCut = true;
   }
   const activeLink = new Uint8Array(graph.links.length);
-  graph.links.forEach((link, k) => {
-    activeLink[k] = activeNode[link.from] && activeNode[link.to] ? 1 : 0;
-  });
+  const links = graph.links;
+  for (let k = 0; k < links.length; k++)
+    activeLink[k] = activeNode[links[k].from] && activeNode[links[k].to] ? 1 : 0;
+  const cut = anyCut ? cutParts(graph, parent, activeNode) : new Map<number, Set<Id>>();
 
   const out: Finding[] = [];
   if (n > 0 && !anyFixed) {
