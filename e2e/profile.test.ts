@@ -77,35 +77,39 @@ async function setTemperature(page: Page, text: string) {
   await field.press('Enter');
 }
 
-test('raising the temperature until the siphon crest flashes marks a stop span there; lowering it clears it', async ({
+test('demo 1: raising the temperature until the rack high point flashes marks a stop span there; lowering it clears it', async ({
   page,
 }) => {
   await openDemo1(page);
-  await openDemoByTitle(page, 'Siphon over a bund wall');
   const chart = panel(page).locator('svg.chart');
-  await expect(chart.locator('[data-waypoint="W1"]')).toBeVisible();
-  // 20 °C: the crest is under vacuum (caution) but far above the vapour pressure.
+  const crossing = chart.locator('[data-waypoint="W1"]');
+  await expect(crossing).toBeVisible();
+  // 60 °C: past FV-101 the rack runs under vacuum (caution) but well above the vapour pressure.
   await expect(chart.locator('rect[data-span="vacuum"]').first()).toBeVisible();
   await expect(chart.locator('rect[data-span="vapour"]')).toHaveCount(0);
 
-  // Water boils at about 47 kPa abs near 80 °C (IAPWS-IF97); the crest sits near 40 kPa abs.
-  await setTemperature(page, '85 °C');
+  // The road crossing (+14 m) sits near 73 kPa abs; water boils at 73 kPa near 91 °C
+  // (IAPWS-IF97 region 4), while the pump suction stays near 122 kPa abs.
+  await setTemperature(page, '95 °C');
   const stop = chart.locator('rect[data-span="vapour"]');
   await expect(stop).toHaveCount(1);
   await expect(chart.locator('text[data-span-label="vapour"]')).toContainText(
     'Below vapour pressure: min',
   );
-  // The span covers the crest.
+  // The span covers the high point, not the pump suction.
   const span = (await stop.boundingBox())!;
-  const crest = (await chart.locator('[data-waypoint="W1"]').boundingBox())!;
-  const crestX = crest.x + crest.width / 2;
-  expect(crestX).toBeGreaterThan(span.x);
-  expect(crestX).toBeLessThan(span.x + span.width);
-  await page.screenshot({ path: `${SHOTS}/profile-siphon-85C.png` });
+  const high = (await crossing.boundingBox())!;
+  const highX = high.x + high.width / 2;
+  expect(highX).toBeGreaterThan(span.x);
+  expect(highX).toBeLessThan(span.x + span.width);
+  const pumpId = 'P1';
+  const pumpLabel = (await chart.locator(`text.label[data-element="${pumpId}"]`).boundingBox())!;
+  expect(pumpLabel.x + pumpLabel.width / 2).toBeLessThan(span.x);
+  await page.screenshot({ path: `${SHOTS}/profile-demo1-95C.png` });
 
-  await setTemperature(page, '20 °C');
+  await setTemperature(page, '60 °C');
   await expect(stop).toHaveCount(0);
-  await page.screenshot({ path: `${SHOTS}/profile-siphon-20C.png` });
+  await page.screenshot({ path: `${SHOTS}/profile-demo1-60C.png` });
 });
 
 test('a waypoint dragged on the profile changes its elevation in details; one undo restores it', async ({
@@ -125,9 +129,9 @@ test('a waypoint dragged on the profile changes its elevation in details; one un
 
   // The drag selects the waypoint: details shows its new, higher elevation.
   const elevation = details(page).getByLabel('Elevation', { exact: true });
-  await expect(elevation).not.toHaveValue('12 m');
+  await expect(elevation).not.toHaveValue('14 m');
   const raised = parseFloat(await elevation.inputValue());
-  expect(raised).toBeGreaterThan(12);
+  expect(raised).toBeGreaterThan(14);
   await expect(chart.locator('path[data-line="pipe"]')).not.toHaveAttribute('d', pipeBefore!);
   await page.screenshot({ path: `${SHOTS}/profile-waypoint-dragged.png` });
 
@@ -136,16 +140,16 @@ test('a waypoint dragged on the profile changes its elevation in details; one un
   await expect(chart.locator('path[data-line="pipe"]')).toHaveAttribute('d', pipeBefore!);
   await chart.locator('[data-waypoint]').first().focus();
   await page.keyboard.press('Enter');
-  await expect(details(page).getByLabel('Elevation', { exact: true })).toHaveValue('12 m');
+  await expect(details(page).getByLabel('Elevation', { exact: true })).toHaveValue('14 m');
 
   // From the keyboard: the arrow keys move the focused waypoint by 0.1 m, one undo step each.
   await page.keyboard.press('ArrowUp');
-  await expect(details(page).getByLabel('Elevation', { exact: true })).toHaveValue('12.1 m');
+  await expect(details(page).getByLabel('Elevation', { exact: true })).toHaveValue('14.1 m');
   await page.locator('svg.sheet').click({ position: { x: 5, y: 5 } });
   await page.keyboard.press('Control+z');
   await chart.locator('[data-waypoint]').first().focus();
   await page.keyboard.press('Enter');
-  await expect(details(page).getByLabel('Elevation', { exact: true })).toHaveValue('12 m');
+  await expect(details(page).getByLabel('Elevation', { exact: true })).toHaveValue('14 m');
 });
 
 test('exports download: SVG parses with the lines and caution, PNG is 2×, CSV has its header', async ({
@@ -165,7 +169,7 @@ test('exports download: SVG parses with the lines and caution, PNG is 2×, CSV h
   expect(parsed.root).toBe('svg');
   expect(parsed.lines.sort()).toEqual(['egl', 'hgl', 'pipe', 'vapour']);
   expect(parsed.text).toContain(CAUTION);
-  expect(parsed.text).toContain('Pump over a pipe rack into a closed receiver');
+  expect(parsed.text).toContain('Pump over a pipe rack into a vented receiver');
   expect(parsed.text).toContain('Route: Storage tank T-101 → Receiver V-201');
   expect(parsed.text).toContain('Case: Base case');
   expect(parsed.text).toMatch(/Liquid: Water at 60 °C/);
@@ -186,7 +190,7 @@ test('exports download: SVG parses with the lines and caution, PNG is 2×, CSV h
     bar.getByRole('button', { name: 'CSV' }).click(),
   ]);
   const csv = (await downloadText(csvDownload)).split('\n');
-  expect(csv[0]).toBe('# Project: Pump over a pipe rack into a closed receiver');
+  expect(csv[0]).toBe('# Project: Pump over a pipe rack into a vented receiver');
   expect(csv.some((l) => l.startsWith('# Screening result'))).toBe(true);
   const header = csv.find((l) => !l.startsWith('#'))!;
   expect(header.startsWith('chainage (m),element,at,elevation (m),HGL (m),EGL (m)')).toBe(true);
@@ -207,7 +211,7 @@ test('selection and hover are shared between the profile and the sheet', async (
   await expect(onSheet).toHaveClass(/hovered/);
   await chart.locator(`text.label[data-element="${id}"]`).click();
   await expect(onSheet).toHaveClass(/selected/);
-  await expect(details(page)).toContainText('Pipe rack high point');
+  await expect(details(page)).toContainText('Road crossing high point');
 
   // And the other way round: a pump picked on the sheet is ringed on the profile.
   const pump = page.locator('svg.sheet g.node[data-kind="pump"]').first();

@@ -54,13 +54,13 @@ describe('demo projects', () => {
     ]) {
       expect(kinds).toContain(k);
     }
-    expect(doc.nodes.W1.z).toBeCloseTo(12, 9);
+    // The road crossing on the rack is the high point; FV-101 throttles at the pump, upstream
+    // of it, and the receiver is vented, so nothing holds the rack above atmospheric pressure.
+    expect(doc.nodes.W1.z).toBeCloseTo(14, 9);
     const receiver = doc.nodes.V2;
-    expect(receiver.kind === 'vessel' && !receiver.open && receiver.gasPressureAbs).toBeCloseTo(
-      301325,
-      0,
-    );
-    expect(doc.nodes.CV1.kind === 'control-valve' && doc.nodes.CV1.opening).toBeCloseTo(0.7, 9);
+    expect(receiver.kind === 'vessel' && receiver.open).toBe(true);
+    expect(doc.routes.R1.nodes.indexOf('CV1')).toBeLessThan(doc.routes.R1.nodes.indexOf('W1'));
+    expect(doc.nodes.CV1.kind === 'control-valve' && doc.nodes.CV1.opening).toBeCloseTo(0.68, 9);
     expect(Object.values(doc.cases).map((c) => c.name)).toEqual([
       'Low tank level',
       'Hot day 80 °C',

@@ -5,9 +5,12 @@
  * fitting K values of the Crane kind, water properties from IAPWS-IF97) so each pump runs near its
  * best-efficiency flow:
  *
- * - pump-over-rack: 30 m³/h at 42 m against 27.8 m static (level 10 m + 2 barg − tank level 3 m),
- *   about 4.4 m friction in 98.5 m of 3" line, 0.2 m on the 4" suction and 9.6 m across FV-101
- *   (Kv 100 equal-percentage at 70 % → Kv 31); BEP of P-101 is 30 m³/h. NPSHa about 10.7 m.
+ * - pump-over-rack: 29.4 m³/h at 22.1 m against 7 m static (vented receiver level 10 m − tank
+ *   level 3 m), about 4.9 m friction and fittings in 96.5 m of 3" line, 0.2 m on the 4" suction
+ *   and 10.8 m across FV-101 (Kv 100 equal-percentage at 68 % → Kv 28.6), which throttles at the
+ *   pump; BEP of P-101 is 30 m³/h. NPSHa about 10.7 m. Past the valve nothing holds the rack up:
+ *   it runs under vacuum (down to −28 kPa(g) at the +14 m road crossing, a caution) and the
+ *   crossing is the first point to flash as the temperature rises (from about 91 °C).
  * - siphon-over-bund: 4 m level difference drives about 61 m³/h through 50 m of HDPE (90 mm
  *   bore); the crest at +5 m sits about 6.2 m below atmospheric pressure (about 40 kPa abs),
  *   well above the 2.3 kPa vapour pressure of water at 20 °C.
@@ -32,7 +35,7 @@ export const EXAMPLES: readonly ExampleProject[] = [
     file: 'pump-over-rack.headroute.json',
     title: 'Pump over a pipe rack',
     summary:
-      'Warm water (60 °C) pumped from a ground-level tank over a +12 m rack into a closed receiver at 2 barg, with strainer, gate and check valves and a control valve.',
+      'Warm water (60 °C) pumped from a ground-level tank over a pipe rack (high point +14 m at a road crossing) into a vented receiver; the control valve at the pump leaves the rack under vacuum.',
   },
   {
     file: 'siphon-over-bund.headroute.json',
