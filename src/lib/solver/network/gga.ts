@@ -13,6 +13,7 @@
  */
 import { sparseLdlFor } from '../sparse/ldl';
 import type { HydraulicGraph } from './build';
+import { PipeLaw } from './laws';
 
 /** Smallest link slope used in the matrix, s/m² (a lossless link at zero flow). */
 export const MIN_SLOPE = 1e-4;
@@ -66,7 +67,8 @@ export function gradientSolve(
   activeNode: Uint8Array,
   activeLink: Uint8Array,
 ): GgaOutcome {
-  const nLinks = graph.links.length;
+  const links = graph.links;
+  const nLinks = links.length;
   const heads = new Float64Array(graph.nodeCount);
   const flows = new Float64Array(nLinks);
   const freeIndex = new Int32Array(graph.nodeCount).fill(-1);
@@ -77,32 +79,55 @@ export function gradientSolve(
     else freeIndex[i] = nFree++;
   }
 
+  // Per-link data in flat arrays; the active links with a law split into pipes (one law class,
+  // so the calls below stay monomorphic) and the rest. Each link's law is evaluated on its own,
+  // so the split does not change any number; the matrix is assembled in link order.
+  const from = new Int32Array(nLinks);
+  const to = new Int32Array(nLinks);
+  const freeFrom = new Int32Array(nLinks);
+  const freeTo = new Int32Array(nLinks);
+  const active: number[] = [];
+  const pipeLinks: number[] = [];
+  const pipeLaws: PipeLaw[] = [];
+  const otherLinks: number[] = [];
   const edgeA: number[] = [];
   const edgeB: number[] = [];
   const edgeLink: number[] = [];
-  graph.links.forEach((link, k) => {
-    if (!activeLink[k] || link.law === null) return;
-    const a = freeIndex[link.from];
-    const b = freeIndex[link.to];
+  for (let k = 0; k < nLinks; k++) {
+    const link = links[k];
+    from[k] = link.from;
+    to[k] = link.to;
+    freeFrom[k] = freeIndex[link.from];
+    freeTo[k] = freeIndex[link.to];
+    if (!activeLink[k]) continue;
+    active.push(k);
+    const law = link.law;
+    if (law === null) {
+      flows[k] = link.fixedFlow;
+      continue;
+    }
+    flows[k] = law.initialFlow;
+    if (law instanceof PipeLaw) {
+      pipeLinks.push(k);
+      pipeLaws.push(law);
+    } else otherLinks.push(k);
+    const a = freeFrom[k];
+    const b = freeTo[k];
     if (a >= 0 && b >= 0 && a !== b) {
       edgeA.push(a);
       edgeB.push(b);
       edgeLink.push(k);
     }
-  });
+  }
   const ldl = sparseLdlFor(nFree, edgeA, edgeB);
   const diagonal = new Float64Array(nFree);
   const offDiagonal = new Float64Array(edgeA.length);
   const rhs = new Float64Array(nFree);
+  const solution = new Float64Array(nFree);
   const loss = new Float64Array(nLinks);
   const slope = new Float64Array(nLinks);
   /** Flow at which each law is linearised this iteration (the current flow, or 0 to reopen a non-return). */
   const point = new Float64Array(nLinks);
-
-  graph.links.forEach((link, k) => {
-    if (!activeLink[k]) return;
-    flows[k] = link.law === null ? link.fixedFlow : link.law.initialFlow;
-  });
 
   let iterations = 0;
   let residual = Infinity;
@@ -111,11 +136,24 @@ export function gradientSolve(
     // Laws at the current flows; the head residual of the previous solve comes for free.
     residual = 0;
     let stiffSettled = true;
-    for (let k = 0; k < nLinks; k++) {
-      const law = graph.links[k].law;
-      if (!activeLink[k] || law === null) continue;
-      const link = graph.links[k];
-      const drop = heads[link.from] - heads[link.to];
+    for (let i = 0; i < pipeLinks.length; i++) {
+      const k = pipeLinks[i];
+      const law = pipeLaws[i];
+      const q = flows[k];
+      const lossK = law.headLoss(q);
+      const slopeK = law.slope(q);
+      loss[k] = lossK;
+      point[k] = q;
+      const linkResidual = Math.abs(heads[from[k]] - heads[to[k]] - lossK);
+      if (slopeK >= STIFF_SLOPE) {
+        if (!(linkResidual / slopeK <= STIFF_FLOW_TOLERANCE)) stiffSettled = false;
+      } else residual = Math.max(residual, linkResidual);
+      slope[k] = Math.max(slopeK, MIN_SLOPE);
+    }
+    for (let i = 0; i < otherLinks.length; i++) {
+      const k = otherLinks[i];
+      const law = links[k].law!;
+      const drop = heads[from[k]] - heads[to[k]];
       const q = flows[k];
       law.refresh(q);
       loss[k] = law.headLoss(q);
@@ -167,40 +205,43 @@ export function gradientSolve(
 
     diagonal.fill(0);
     rhs.fill(0);
-    for (let k = 0; k < nLinks; k++) {
-      if (!activeLink[k]) continue;
-      const link = graph.links[k];
-      const a = freeIndex[link.from];
-      const b = freeIndex[link.to];
+    for (let i = 0; i < active.length; i++) {
+      const k = active[i];
+      const a = freeFrom[k];
+      const b = freeTo[k];
+      const link = links[k];
       if (link.law === null) {
         // Flow-controlled link: a known outflow at `from` and inflow at `to`.
         if (a >= 0) rhs[a] -= link.fixedFlow;
         if (b >= 0) rhs[b] += link.fixedFlow;
         continue;
       }
-      if (link.from === link.to) continue;
+      if (from[k] === to[k]) continue;
       const w = 1 / slope[k];
       const y = point[k] - loss[k] * w;
       if (a >= 0) {
         diagonal[a] += w;
         rhs[a] -= y;
-        if (b < 0) rhs[a] += w * heads[link.to];
+        if (b < 0) rhs[a] += w * heads[to[k]];
       }
       if (b >= 0) {
         diagonal[b] += w;
         rhs[b] += y;
-        if (a < 0) rhs[b] += w * heads[link.from];
+        if (a < 0) rhs[b] += w * heads[from[k]];
       }
     }
     for (let e = 0; e < edgeLink.length; e++) offDiagonal[e] = -1 / slope[edgeLink[e]];
     if (!ldl.factor(diagonal, offDiagonal)) break;
-    const solution = ldl.solve(rhs);
+    ldl.solveInto(rhs, solution);
     for (let i = 0; i < graph.nodeCount; i++)
       if (freeIndex[i] >= 0) heads[i] = solution[freeIndex[i]];
-    for (let k = 0; k < nLinks; k++) {
-      const link = graph.links[k];
-      if (!activeLink[k] || link.law === null) continue;
-      flows[k] = point[k] + (heads[link.from] - heads[link.to] - loss[k]) / slope[k];
+    for (let i = 0; i < pipeLinks.length; i++) {
+      const k = pipeLinks[i];
+      flows[k] = point[k] + (heads[from[k]] - heads[to[k]] - loss[k]) / slope[k];
+    }
+    for (let i = 0; i < otherLinks.length; i++) {
+      const k = otherLinks[i];
+      flows[k] = point[k] + (heads[from[k]] - heads[to[k]] - loss[k]) / slope[k];
     }
   }
 

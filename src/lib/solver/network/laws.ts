@@ -17,6 +17,7 @@ import {
   reynoldsNumber,
   TURBULENT_LIMIT_REYNOLDS,
 } from '../../physics/friction';
+import { colebrookWhiteFrom } from './colebrook';
 
 /** Standard gravity, m/s² (ISO 2533 / CGPM 1901). */
 export const GRAVITY = ISA_STANDARD_GRAVITY;
@@ -212,7 +213,12 @@ export class PipeLaw implements LinkLaw {
         (this.turbulentAtLimit - laminar) / (TURBULENT_LIMIT_REYNOLDS - LAMINAR_LIMIT_REYNOLDS);
       f = laminar + (re - LAMINAR_LIMIT_REYNOLDS) * dfdRe;
     } else {
-      f = colebrookWhite(re, this.relativeRoughness);
+      // The first turbulent evaluation starts from Serghides' estimate (physics/friction);
+      // later ones from this pipe's last root (colebrook.ts), the same root to rounding.
+      f =
+        this.memoFactor > 0 && re < Infinity
+          ? colebrookWhiteFrom(re, this.relativeRoughness, 1 / Math.sqrt(this.memoFactor))
+          : colebrookWhite(re, this.relativeRoughness);
       const x = 1 / Math.sqrt(f);
       const b = 2.51 / re;
       const s = this.relativeRoughness / 3.7 + b * x;

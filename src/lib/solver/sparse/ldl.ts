@@ -149,9 +149,14 @@ export class SparseLdl {
 
   /** Solves A x = b with the last factorisation; `b` and the result use original indexing. */
   solve(b: ArrayLike<number>): Float64Array {
+    return this.solveInto(b, new Float64Array(this.size));
+  }
+
+  /** As `solve`, writing x into `result` (length `size`, not `b`) and returning it. */
+  solveInto(b: ArrayLike<number>, result: Float64Array): Float64Array {
     const { perm, columnStart, rows } = this.order;
     const n = this.size;
-    const y = new Float64Array(n);
+    const y = this.work;
     for (let j = 0; j < n; j++) y[j] = b[perm[j]];
     for (let j = 0; j < n; j++) {
       const yj = y[j];
@@ -164,8 +169,10 @@ export class SparseLdl {
       for (let p = columnStart[j]; p < columnStart[j + 1]; p++) s -= this.values[p] * y[rows[p]];
       y[j] = s;
     }
-    const result = new Float64Array(n);
-    for (let j = 0; j < n; j++) result[perm[j]] = y[j];
+    for (let j = 0; j < n; j++) {
+      result[perm[j]] = y[j];
+      y[j] = 0; // `factor` expects its work vector clear
+    }
     return result;
   }
 
