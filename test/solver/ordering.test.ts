@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { minimumDegreeOrder } from '../../src/lib/solver/sparse/ordering';
 import { sparseLdlFor } from '../../src/lib/solver/sparse/ldl';
+import { forestOrder } from '../../src/lib/solver/sparse/forestOrder';
 
 /**
  * Reference minimum-degree elimination on the explicit elimination graph (Tinney and Walker,
@@ -107,5 +108,61 @@ describe('minimum-degree ordering on the quotient graph', () => {
     expect(again.factor(diag, off)).toBe(true);
     const x2 = again.solve(rhs);
     expect(Array.from(x2)).toEqual(Array.from(x1));
+  });
+});
+
+describe('minimum-degree ordering of forests (leaf peeling, sparse/forestOrder.ts)', () => {
+  it('gives the order and pattern of explicit elimination on random forests (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 60 }),
+        fc.array(fc.tuple(fc.nat(), fc.nat(), fc.boolean()), { maxLength: 80 }),
+        (n, picks) => {
+          // Each node i > 0 may hang on an earlier node (a forest); some edges are repeated,
+          // reversed or self-loops, which the ordering must ignore.
+          const a: number[] = [];
+          const b: number[] = [];
+          const parentOf = new Map<number, number>();
+          picks.forEach(([i, j, flip]) => {
+            const child = 1 + (i % Math.max(1, n - 1));
+            if (child >= n) return;
+            // One parent per node keeps it a forest; picking the same one again repeats the edge.
+            const parent = parentOf.get(child) ?? j % child;
+            parentOf.set(child, parent);
+            a.push(flip ? parent : child);
+            b.push(flip ? child : parent);
+            if (j % 7 === 0) {
+              a.push(child);
+              b.push(child);
+            }
+          });
+          expect(forestOrder(n, a, b)).not.toBeNull();
+          expectSameAsReference(n, a, b);
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+
+  it('answers null for a graph with a cycle, which the quotient-graph code then orders', () => {
+    expect(forestOrder(3, [0, 1, 2], [1, 2, 0])).toBeNull();
+    expect(forestOrder(4, [0, 1, 1], [1, 0, 2])).not.toBeNull(); // a repeated edge is no cycle
+  });
+
+  it('a 2,000-node series line and a binary tree: order of explicit elimination, no fill', () => {
+    const line = { a: [] as number[], b: [] as number[] };
+    // Numbered from the middle out, so ties and leaf order are not just the index order.
+    for (let i = 1; i < 2000; i++) {
+      line.a.push((i * 7919) % 2000);
+      line.b.push(((i - 1) * 7919) % 2000);
+    }
+    expectSameAsReference(2000, line.a, line.b);
+    const tree = { a: [] as number[], b: [] as number[] };
+    for (let i = 1; i < 1023; i++) {
+      tree.a.push(i);
+      tree.b.push((i - 1) >> 1);
+    }
+    expectSameAsReference(1023, tree.a, tree.b);
+    expect(minimumDegreeOrder(1023, tree.a, tree.b).rows.length).toBe(1022);
   });
 });

@@ -7,6 +7,9 @@
  * factor costs O(n); on looped networks the fill stays local.
  */
 
+import { forestOrder } from './forestOrder';
+import { KeyHeap } from './keyHeap';
+
 /** An elimination order and, for each eliminated node, the later nodes its column touches. */
 export interface EliminationOrder {
   /** perm[step] = original node index eliminated at that step. */
@@ -17,67 +20,6 @@ export interface EliminationOrder {
   columnStart: Int32Array;
   /** Row indices (in step numbering, ascending within a column) of the factor's below-diagonal entries. */
   rows: Int32Array;
-}
-
-/** A binary min-heap of (degree, node) pairs with lazy deletion. */
-class DegreeHeap {
-  private keys: number[] = [];
-  private nodes: number[] = [];
-
-  push(key: number, node: number): void {
-    const keys = this.keys;
-    const nodes = this.nodes;
-    let i = keys.length;
-    keys.push(key);
-    nodes.push(node);
-    while (i > 0) {
-      const parent = (i - 1) >> 1;
-      if (!this.less(i, parent)) break;
-      this.swap(i, parent);
-      i = parent;
-    }
-  }
-
-  /** Removes and returns the smallest entry, or null when empty. */
-  pop(): { key: number; node: number } | null {
-    const keys = this.keys;
-    const nodes = this.nodes;
-    if (keys.length === 0) return null;
-    const top = { key: keys[0], node: nodes[0] };
-    const lastKey = keys.pop()!;
-    const lastNode = nodes.pop()!;
-    if (keys.length > 0) {
-      keys[0] = lastKey;
-      nodes[0] = lastNode;
-      let i = 0;
-      for (;;) {
-        const l = 2 * i + 1;
-        const r = l + 1;
-        let m = i;
-        if (l < keys.length && this.less(l, m)) m = l;
-        if (r < keys.length && this.less(r, m)) m = r;
-        if (m === i) break;
-        this.swap(i, m);
-        i = m;
-      }
-    }
-    return top;
-  }
-
-  private less(a: number, b: number): boolean {
-    const ka = this.keys[a];
-    const kb = this.keys[b];
-    return ka < kb || (ka === kb && this.nodes[a] < this.nodes[b]);
-  }
-
-  private swap(a: number, b: number): void {
-    const k = this.keys[a];
-    this.keys[a] = this.keys[b];
-    this.keys[b] = k;
-    const n = this.nodes[a];
-    this.nodes[a] = this.nodes[b];
-    this.nodes[b] = n;
-  }
 }
 
 /**
@@ -97,6 +39,15 @@ export function minimumDegreeOrder(
   edgeA: ArrayLike<number>,
   edgeB: ArrayLike<number>,
 ): EliminationOrder {
+  return forestOrder(n, edgeA, edgeB) ?? quotientGraphOrder(n, edgeA, edgeB);
+}
+
+/** Minimum degree on the quotient graph, for any pattern (see minimumDegreeOrder). */
+function quotientGraphOrder(
+  n: number,
+  edgeA: ArrayLike<number>,
+  edgeB: ArrayLike<number>,
+): EliminationOrder {
   const variables = distinctNeighbours(n, edgeA, edgeB);
   const elementsOf: number[][] = Array.from({ length: n }, () => []);
   /** elementVariables[e]: the live nodes next to element e (the eliminated node e). */
@@ -106,10 +57,11 @@ export function minimumDegreeOrder(
   const degree = new Int32Array(n);
   const mark = new Int32Array(n);
   let stamp = 0;
-  const heap = new DegreeHeap();
+  // Keys degree·n + node: least degree first, ties to the lower index; stale keys skipped.
+  const heap = new KeyHeap(2 * n);
   for (let i = 0; i < n; i++) {
     degree[i] = variables[i].length;
-    heap.push(degree[i], i);
+    heap.push(degree[i] * n + i);
   }
 
   const perm = new Int32Array(n);
@@ -117,10 +69,10 @@ export function minimumDegreeOrder(
   const columns: number[][] = [];
   let step = 0;
   while (step < n) {
-    const entry = heap.pop();
-    if (entry === null) break;
-    const v = entry.node;
-    if (eliminated[v] || entry.key !== degree[v]) continue; // stale heap entry
+    if (heap.size === 0) break;
+    const key = heap.pop();
+    const v = key % n;
+    if (eliminated[v] || (key - v) / n !== degree[v]) continue; // stale heap entry
     eliminated[v] = 1;
     perm[step] = v;
     inverse[v] = step;
@@ -178,7 +130,7 @@ export function minimumDegreeOrder(
         }
       }
       degree[u] = d;
-      heap.push(d, u);
+      heap.push(d * n + u);
     }
   }
 
