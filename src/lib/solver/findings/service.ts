@@ -29,7 +29,8 @@ export function pipeService(graph: HydraulicGraph, indexed: IndexedResults): Uin
   /** Walk number that last passed each pipe (a loop of inline elements ends the walk). */
   const seen = new Int32Array(n);
   let walks = 0;
-  const chain: number[] = [];
+  /** Pipes passed by the current walk (a walk passes each pipe at most once). */
+  const chain = new Int32Array(n);
 
   /**
    * The port slot a line ends on, walking from a pipe with (+1) or against (−1) the flow; every
@@ -38,7 +39,7 @@ export function pipeService(graph: HydraulicGraph, indexed: IndexedResults): Uin
   const walk = (start: number, direction: 1 | -1): number => {
     const known = memo[direction === 1 ? 0 : 1];
     const stamp = ++walks;
-    chain.length = 0;
+    let length = 0;
     let p = start;
     let end = -1;
     for (;;) {
@@ -48,7 +49,7 @@ export function pipeService(graph: HydraulicGraph, indexed: IndexedResults): Uin
       }
       if (seen[p] === stamp) break;
       seen[p] = stamp;
-      chain.push(p);
+      chain[length++] = p;
       const gp = pipeList[p];
       const forward = indexed.pipes[p].flow >= 0;
       const slot = (direction === 1) === forward ? gp.toSlot : gp.fromSlot;
@@ -64,7 +65,7 @@ export function pipeService(graph: HydraulicGraph, indexed: IndexedResults): Uin
       if (e === portPipeStart[other + 1]) break;
       p = portPipeList[e];
     }
-    for (const c of chain) known[c] = end;
+    for (let c = 0; c < length; c++) known[chain[c]] = end;
     return end;
   };
 

@@ -82,18 +82,17 @@ export function sheetFindings(
     const id = gp.pipe.id;
     const r = indexed.pipes[p];
     const name = gp.pipe.name;
-    const ends = [
-      { p: pAtm + rhoG * ((r.headFrom ?? 0) - gp.elevationFrom), label: 'start' },
-      { p: pAtm + rhoG * ((r.headTo ?? 0) - gp.elevationTo), label: 'end' },
-    ];
-    const low = ends[0].p <= ends[1].p ? ends[0] : ends[1];
-    const high = ends[0].p >= ends[1].p ? ends[0] : ends[1];
-    if (low.p < pv)
-      out.push(findings.belowVapourPressure(name, `at its ${low.label}`, low.p, pv, id));
-    else if (low.p < pAtm - 1e-6 * pAtm) out.push(findings.vacuum(name, low.p - pAtm, id));
+    const pStart = pAtm + rhoG * ((r.headFrom ?? 0) - gp.elevationFrom);
+    const pEnd = pAtm + rhoG * ((r.headTo ?? 0) - gp.elevationTo);
+    const low = pStart <= pEnd ? pStart : pEnd;
+    const high = pStart >= pEnd ? pStart : pEnd;
+    if (low < pv) {
+      const where = pStart <= pEnd ? 'at its start' : 'at its end';
+      out.push(findings.belowVapourPressure(name, where, low, pv, id));
+    } else if (low < pAtm - 1e-6 * pAtm) out.push(findings.vacuum(name, low - pAtm, id));
     const design = gp.pipe.designPressureGauge;
-    if (design !== null && high.p - pAtm > design)
-      out.push(findings.aboveDesignPressure(name, high.p - pAtm, design, id));
+    if (design !== null && high - pAtm > design)
+      out.push(findings.aboveDesignPressure(name, high - pAtm, design, id));
 
     if (r.regime === 'no-flow') continue;
     const speed = Math.abs(r.velocity);

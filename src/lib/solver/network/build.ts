@@ -13,7 +13,7 @@
  *   starts with that total head (no entrance loss), liquid delivered into it keeps that
  *   pressure at the pipe end (its velocity head is lost, exit K = 1).
  */
-import type { HeadrouteDocument, Id, Pipe, PortRef, SheetNode } from '../../model/types';
+import type { HeadrouteDocument, Id, Pipe, SheetNode } from '../../model/types';
 import { findPipeMaterial, DEFAULT_MATERIAL, PIPE_MATERIALS } from '../../physics/materials';
 import { catalogueInnerDiameter } from '../../physics/pipeCatalogue';
 import type { Finding } from '../types';
@@ -112,17 +112,16 @@ function finite(...values: number[]): boolean {
   return values.every((v) => Number.isFinite(v));
 }
 
-/** A pipe end that names a node and port of the sheet, or the reason it does not. */
+/** Port slot of a pipe end, or −1 when its node or port is not on the sheet. */
 function endSlot(
-  graph: { sheetNodes: SheetNode[]; portStart: Int32Array },
-  nodeIndex: Map<Id, number>,
-  ref: PortRef,
-): { node: SheetNode | undefined; index: number; slot: number } {
-  const index = nodeIndex.get(ref.node);
-  if (index === undefined) return { node: undefined, index: -1, slot: -1 };
-  const node = graph.sheetNodes[index];
-  const local = portIndex(node, ref.port);
-  return { node, index, slot: local < 0 ? -1 : graph.portStart[index] + local };
+  sheetNodes: SheetNode[],
+  portStart: Int32Array,
+  index: number | undefined,
+  port: string,
+): number {
+  if (index === undefined) return -1;
+  const local = portIndex(sheetNodes[index], port);
+  return local < 0 ? -1 : portStart[index] + local;
 }
 
 /** Builds the hydraulic graph; problems with the input come back as findings. */
@@ -229,38 +228,25 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   const links: HydraulicLink[] = [];
   const pipeList: GraphPipe[] = [];
   const boreCache = new Map<string, number | undefined>();
-  const shape = { sheetNodes, portStart };
   for (const pipe of Object.values(doc.pipes)) {
-    const a = endSlot(shape, nodeIndex, pipe.from);
-    const b = endSlot(shape, nodeIndex, pipe.to);
+    const fromIndex = nodeIndex.get(pipe.from.node);
+    const toIndex = nodeIndex.get(pipe.to.node);
+    const fromSlot = endSlot(sheetNodes, portStart, fromIndex, pipe.from.port);
+    const toSlot = endSlot(sheetNodes, portStart, toIndex, pipe.to.port);
     let broken = false;
-    if (a.slot < 0) {
-      out.push(
-        findings.brokenConnection(
-          pipe.name,
-          'from',
-          a.node?.name ?? pipe.from.node,
-          pipe.from.port,
-          pipe.id,
-        ),
-      );
+    if (fromSlot < 0) {
+      const name = fromIndex === undefined ? pipe.from.node : sheetNodes[fromIndex].name;
+      out.push(findings.brokenConnection(pipe.name, 'from', name, pipe.from.port, pipe.id));
       broken = true;
-    } else if (!usable[a.index]) broken = true;
-    if (b.slot < 0) {
-      out.push(
-        findings.brokenConnection(
-          pipe.name,
-          'to',
-          b.node?.name ?? pipe.to.node,
-          pipe.to.port,
-          pipe.id,
-        ),
-      );
+    } else if (!usable[fromIndex!]) broken = true;
+    if (toSlot < 0) {
+      const name = toIndex === undefined ? pipe.to.node : sheetNodes[toIndex].name;
+      out.push(findings.brokenConnection(pipe.name, 'to', name, pipe.to.port, pipe.id));
       broken = true;
-    } else if (!usable[b.index]) broken = true;
+    } else if (!usable[toIndex!]) broken = true;
     if (broken) continue;
-    const fromNode = a.node!;
-    const toNode = b.node!;
+    const fromNode = sheetNodes[fromIndex!];
+    const toNode = sheetNodes[toIndex!];
     const diameter = pipeDiameter(pipe, boreCache);
     const roughness = pipeRoughness(pipe);
     if (diameter === undefined || !(diameter > 0) || !Number.isFinite(diameter)) {
@@ -293,8 +279,8 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       );
       continue;
     }
-    const fromLocal = a.slot - portStart[a.index];
-    const toLocal = b.slot - portStart[b.index];
+    const fromLocal = fromSlot - portStart[fromIndex!];
+    const toLocal = toSlot - portStart[toIndex!];
     // Entrance/exit K at an end on a vessel nozzle or a boundary (a boundary: 0 and 1).
     const fromEnd = endCoefficients(fromNode, fromLocal);
     const toEnd = endCoefficients(toNode, toLocal);
@@ -302,8 +288,8 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
     const kForward = (fromEnd ? fromEnd.entranceK : 0) + (toEnd ? toEnd.exitK : 0);
     const kReverse = (fromEnd ? fromEnd.exitK : 0) + (toEnd ? toEnd.entranceK : 0);
     const law = new PipeLaw(diameter, pipe.length, roughness / diameter, fluid, kForward, kReverse);
-    const from = portNode[a.slot];
-    const to = portNode[b.slot];
+    const from = portNode[fromSlot];
+    const to = portNode[toSlot];
     const link = links.length;
     links.push({ element: pipe.id, kind: 'pipe', from, to, law, fixedFlow: 0, info: null });
     pipeList.push({
@@ -312,8 +298,8 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       law,
       elevationFrom: portElevationAt(fromNode, fromLocal),
       elevationTo: portElevationAt(toNode, toLocal),
-      fromSlot: a.slot,
-      toSlot: b.slot,
+      fromSlot,
+      toSlot,
       entranceFrom: fromEnd ? fromEnd.entranceK : 0,
       exitFrom: fromEnd ? fromEnd.exitK : 1,
       entranceTo: toEnd ? toEnd.entranceK : 0,
