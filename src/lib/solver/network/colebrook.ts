@@ -1,21 +1,30 @@
 /**
  * Colebrook–White friction factor re-solved from a nearby root. Between two iterations of the
- * network solve a pipe's Reynolds number changes little, so the last 1/√f of that pipe is a
- * better start for Newton's method than an explicit estimate: it saves the estimate's three
- * logarithms and usually a Newton step, and ends on the same root.
+ * network solve a pipe's Reynolds number changes little, so its last root (moved along the
+ * root's known slope dx/dRe) is a better start for Newton's method than an explicit estimate:
+ * it saves the estimate's three logarithms and usually a Newton step, and ends on the same root.
  */
+
+/**
+ * Relative Newton step after which the iteration stops, 1e-7. Newton's error after a step is
+ * |g''|/(2g')·e² with e ≈ δ (the step) the error before it. For g(x) = x + 2 log10(a + b x),
+ * g' ≥ 1 and |g''| = 2b²/(ln10·(a + bx)²) ≤ 2/(ln10·x²), so what is left after a step
+ * δ ≤ 1e-7·x is at most 0.434·(δ/x)² ≤ 4.4e-15 in x = 1/√f: rounding level for x ≥ 3
+ * (f ≤ 0.11). physics/friction `colebrookWhite` takes one more step, to δ ≤ 1e-13·x.
+ */
+export const STOP_STEP = 1e-7;
 
 /**
  * Darcy friction factor from the Colebrook–White equation (Colebrook, J. Inst. Civ. Eng. 11,
  * 1939), 1/√f = −2 log10( (ε/D)/3.7 + 2.51/(Re √f) ), by Newton's method on x = 1/√f,
  * g(x) = x + 2 log10(a + b x) with a = (ε/D)/3.7 and b = 2.51/Re, started from `start`.
- * Iteration and stopping rule are those of physics/friction `colebrookWhite` (step below 1e-13
- * of x; a step below zero is halved instead), which starts from Serghides' estimate; g is
- * increasing and concave, so from any positive start the iteration reaches the same root.
+ * The iteration is that of physics/friction `colebrookWhite` (a step below zero is halved
+ * instead), which starts from Serghides' estimate; g is increasing and concave, so from any
+ * positive start it reaches the same root. It stops after a step below STOP_STEP·x.
  *
  * @param reynolds Re > 0, finite (the caller checks)
  * @param relativeRoughness ε/D, 0 ≤ ε/D < 1 (the caller checks)
- * @param start a positive starting value of 1/√f (e.g. the root at a nearby Re)
+ * @param start a starting value of 1/√f (e.g. the root at a nearby Re); 1 if not positive
  */
 export function colebrookWhiteFrom(
   reynolds: number,
@@ -33,7 +42,7 @@ export function colebrookWhiteFrom(
     if (!(next > 0)) next = x / 2;
     const step = Math.abs(next - x);
     x = next;
-    if (step <= 1e-13 * x) break;
+    if (step <= STOP_STEP * x) break;
   }
   return 1 / (x * x);
 }

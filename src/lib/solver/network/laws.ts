@@ -169,6 +169,10 @@ export class PipeLaw implements LinkLaw {
   private memoSlope = 0;
   /** Darcy friction factor of the last evaluation (turbulent and transitional flow only). */
   private memoFactor = 0;
+  /** 1/√f of the last turbulent evaluation (NaN before one), its Re and d(1/√f)/dRe there. */
+  private rootX = NaN;
+  private rootReynolds = NaN;
+  private rootSlope = NaN;
   /** Colebrook–White f at Re = 4000 for this pipe, the upper end of the transition (lazy). */
   private turbulentAtLimit = NaN;
 
@@ -214,16 +218,22 @@ export class PipeLaw implements LinkLaw {
       f = laminar + (re - LAMINAR_LIMIT_REYNOLDS) * dfdRe;
     } else {
       // The first turbulent evaluation starts from Serghides' estimate (physics/friction);
-      // later ones from this pipe's last root (colebrook.ts), the same root to rounding.
+      // later ones from this pipe's last root moved along its slope (colebrook.ts), which
+      // reaches the same root to rounding.
+      let start = this.rootX + this.rootSlope * (re - this.rootReynolds);
+      if (!(start > 0)) start = this.rootX;
       f =
-        this.memoFactor > 0 && re < Infinity
-          ? colebrookWhiteFrom(re, this.relativeRoughness, 1 / Math.sqrt(this.memoFactor))
+        start > 0 && re < Infinity
+          ? colebrookWhiteFrom(re, this.relativeRoughness, start)
           : colebrookWhite(re, this.relativeRoughness);
       const x = 1 / Math.sqrt(f);
       const b = 2.51 / re;
       const s = this.relativeRoughness / 3.7 + b * x;
       const dxdRe = (2 * b * x) / (Math.LN10 * s * re) / (1 + (2 * b) / (Math.LN10 * s));
       dfdRe = (-2 * dxdRe) / (x * x * x);
+      this.rootX = x;
+      this.rootReynolds = re;
+      this.rootSlope = dxdRe;
     }
     this.memoFactor = f;
     const v = flow / this.area;
