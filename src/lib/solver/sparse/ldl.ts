@@ -111,6 +111,8 @@ export class SparseLdl {
     const pivots = this.pivots;
     const x = this.work;
     const next = this.next;
+    const rowStart = this.rowStart;
+    const rowColumns = this.rowColumns;
     values.fill(0);
     for (let e = 0; e < this.edgeSlot.length; e++) {
       const slot = this.edgeSlot[e];
@@ -123,8 +125,8 @@ export class SparseLdl {
       const start = columnStart[j];
       const end = columnStart[j + 1];
       for (let p = start; p < end; p++) x[rows[p]] = values[p];
-      for (let r = this.rowStart[j]; r < this.rowStart[j + 1]; r++) {
-        const k = this.rowColumns[r];
+      for (let r = rowStart[j]; r < rowStart[j + 1]; r++) {
+        const k = rowColumns[r];
         const p = next[k]; // position of row j in column k (rows ascend, j ascends)
         const ljk = values[p];
         const t = ljk * pivots[k];
@@ -157,16 +159,18 @@ export class SparseLdl {
     const { perm, columnStart, rows } = this.order;
     const n = this.size;
     const y = this.work;
+    const values = this.values;
+    const pivots = this.pivots;
     for (let j = 0; j < n; j++) y[j] = b[perm[j]];
     for (let j = 0; j < n; j++) {
       const yj = y[j];
       if (yj !== 0)
-        for (let p = columnStart[j]; p < columnStart[j + 1]; p++) y[rows[p]] -= this.values[p] * yj;
+        for (let p = columnStart[j]; p < columnStart[j + 1]; p++) y[rows[p]] -= values[p] * yj;
     }
-    for (let j = 0; j < n; j++) y[j] /= this.pivots[j];
+    for (let j = 0; j < n; j++) y[j] /= pivots[j];
     for (let j = n - 1; j >= 0; j--) {
       let s = y[j];
-      for (let p = columnStart[j]; p < columnStart[j + 1]; p++) s -= this.values[p] * y[rows[p]];
+      for (let p = columnStart[j]; p < columnStart[j + 1]; p++) s -= values[p] * y[rows[p]];
       y[j] = s;
     }
     for (let j = 0; j < n; j++) {
