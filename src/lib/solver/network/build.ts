@@ -108,10 +108,6 @@ function pipeRoughness(pipe: Pipe): number {
   return (findPipeMaterial(pipe.material) ?? PIPE_MATERIALS[DEFAULT_MATERIAL]).roughness;
 }
 
-function finite(...values: number[]): boolean {
-  return values.every((v) => Number.isFinite(v));
-}
-
 /** Port slot of a pipe end, or −1 when its node or port is not on the sheet. */
 function endSlot(
   sheetNodes: SheetNode[],
@@ -141,7 +137,8 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   }
   const nSlots = portStart[nSheet];
   const slotOwner = new Int32Array(nSlots);
-  for (let i = 0; i < nSheet; i++) slotOwner.fill(i, portStart[i], portStart[i + 1]);
+  for (let i = 0; i < nSheet; i++)
+    for (let slot = portStart[i]; slot < portStart[i + 1]; slot++) slotOwner[slot] = i;
   const portNode = new Int32Array(nSlots).fill(-1);
   const usable = new Uint8Array(nSheet);
   // Graph nodes: at most one per port slot plus one per vessel.
@@ -163,7 +160,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   for (let i = 0; i < nSheet; i++) {
     const node = sheetNodes[i];
     const s = portStart[i];
-    if (!finite(node.z)) {
+    if (!Number.isFinite(node.z)) {
       out.push(
         findings.invalidInput(
           node.name,
@@ -177,7 +174,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       case 'vessel': {
         const gas = node.open ? 0 : (node.gasPressureAbs - fluid.atmosphericPressure) / rhoG;
         const head = node.liquidLevel + gas;
-        if (!finite(head) || (!node.open && !(node.gasPressureAbs > 0))) {
+        if (!Number.isFinite(head) || (!node.open && !(node.gasPressureAbs > 0))) {
           out.push(
             findings.invalidInput(
               node.name,
@@ -193,7 +190,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       }
       case 'boundary': {
         const head = node.z + (node.pressureAbs - fluid.atmosphericPressure) / rhoG;
-        if (!finite(head) || !(node.pressureAbs >= 0)) {
+        if (!Number.isFinite(head) || !(node.pressureAbs >= 0)) {
           out.push(
             findings.invalidInput(
               node.name,

@@ -84,6 +84,8 @@ export class PipeLaw implements LinkLaw {
   readonly area: number;
   readonly initialFlow: number;
   private readonly laminarSlope: number;
+  /** L/D/2g of Darcy–Weisbach, s²/m. */
+  private readonly lOverD2g: number;
 
   /**
    * @param diameter inner diameter, m
@@ -106,6 +108,7 @@ export class PipeLaw implements LinkLaw {
     // Hagen–Poiseuille: h = 32 μ L v /(ρ g D²), per unit flow (v = Q/A).
     this.laminarSlope =
       (32 * fluid.viscosity * length) / (fluid.density * GRAVITY * diameter * diameter * this.area);
+    this.lOverD2g = length / diameter / (2 * GRAVITY);
   }
 
   refresh(): void {}
@@ -238,7 +241,7 @@ export class PipeLaw implements LinkLaw {
     this.memoFactor = f;
     const v = flow / this.area;
     const speed = Math.abs(v);
-    const lOverD2g = this.length / this.diameter / (2 * GRAVITY);
+    const lOverD2g = this.lOverD2g;
     this.memoLoss = f * lOverD2g * v * speed;
     this.memoSlope = lOverD2g * (speed / this.area) * (re * dfdRe + 2 * f);
   }
