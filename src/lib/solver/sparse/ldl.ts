@@ -131,7 +131,8 @@ export class SparseLdl {
         const ljk = values[p];
         const t = ljk * pivots[k];
         d -= ljk * t;
-        for (let q = p + 1; q < columnStart[k + 1]; q++) x[rows[q]] -= values[q] * t;
+        const kEnd = columnStart[k + 1];
+        for (let q = p + 1; q < kEnd; q++) x[rows[q]] -= values[q] * t;
         next[k] = p + 1;
       }
       if (!(d > 0) || !Number.isFinite(d)) {
@@ -164,13 +165,14 @@ export class SparseLdl {
     for (let j = 0; j < n; j++) y[j] = b[perm[j]];
     for (let j = 0; j < n; j++) {
       const yj = y[j];
-      if (yj !== 0)
-        for (let p = columnStart[j]; p < columnStart[j + 1]; p++) y[rows[p]] -= values[p] * yj;
+      const end = columnStart[j + 1];
+      if (yj !== 0) for (let p = columnStart[j]; p < end; p++) y[rows[p]] -= values[p] * yj;
     }
     for (let j = 0; j < n; j++) y[j] /= pivots[j];
     for (let j = n - 1; j >= 0; j--) {
       let s = y[j];
-      for (let p = columnStart[j]; p < columnStart[j + 1]; p++) s -= values[p] * y[rows[p]];
+      const end = columnStart[j + 1];
+      for (let p = columnStart[j]; p < end; p++) s -= values[p] * y[rows[p]];
       y[j] = s;
     }
     for (let j = 0; j < n; j++) {
