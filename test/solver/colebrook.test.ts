@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { colebrookWhite } from '../../src/lib/physics/friction';
 import { colebrookWhiteFrom } from '../../src/lib/solver/network/colebrook';
+import { ColebrookMemo } from '../../src/lib/solver/network/laws';
 
 // The reference is physics/friction colebrookWhite (Colebrook–White solved from Serghides'
 // estimate to machine precision; its own tests check it against published tables). Started
@@ -37,5 +38,24 @@ describe('colebrookWhiteFrom (Colebrook–White, Newton from a given start)', ()
     const f = colebrookWhite(1e5, 1e-4);
     for (const start of [0, -2, NaN, Infinity])
       expect(Math.abs(colebrookWhiteFrom(1e5, 1e-4, start) - f) / f).toBeLessThan(1e-12);
+  });
+});
+
+describe('ColebrookMemo (Colebrook–White factors shared by the pipes of one solve)', () => {
+  it('answers exactly physics colebrookWhite for repeated and distinct (Re, ε/D) pairs', () => {
+    const memo = new ColebrookMemo();
+    const pairs: Array<[number, number]> = [
+      [1e5, 1e-4],
+      [1e5, 1e-4],
+      [1e5, 2e-4],
+      [2e5, 1e-4],
+      [99_999.99999999999, 1e-4],
+      [1e5, 1e-4],
+    ];
+    for (const [re, rr] of pairs) expect(memo.factor(re, rr)).toBe(colebrookWhite(re, rr));
+  });
+
+  it('still throws for a Reynolds number the equation cannot take, as colebrookWhite does', () => {
+    expect(() => new ColebrookMemo().factor(0, 1e-4)).toThrow(RangeError);
   });
 });

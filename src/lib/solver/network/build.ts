@@ -19,7 +19,7 @@ import { catalogueInnerDiameter } from '../../physics/pipeCatalogue';
 import type { Finding } from '../types';
 import { findings } from '../findings/catalogue';
 import type { SolveFluid } from '../fluid';
-import { GRAVITY, PipeLaw, type LinkLaw } from './laws';
+import { ColebrookMemo, GRAVITY, PipeLaw, type LinkLaw } from './laws';
 import {
   endCoefficients,
   portCount,
@@ -225,6 +225,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   const links: HydraulicLink[] = [];
   const pipeList: GraphPipe[] = [];
   const boreCache = new Map<string, number | undefined>();
+  const colebrook = new ColebrookMemo();
   for (const pipe of Object.values(doc.pipes)) {
     const fromIndex = nodeIndex.get(pipe.from.node);
     const toIndex = nodeIndex.get(pipe.to.node);
@@ -284,7 +285,15 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
     // Forward flow leaves at `from` (entrance) and arrives at `to` (exit); reverse the other way.
     const kForward = (fromEnd ? fromEnd.entranceK : 0) + (toEnd ? toEnd.exitK : 0);
     const kReverse = (fromEnd ? fromEnd.exitK : 0) + (toEnd ? toEnd.entranceK : 0);
-    const law = new PipeLaw(diameter, pipe.length, roughness / diameter, fluid, kForward, kReverse);
+    const law = new PipeLaw(
+      diameter,
+      pipe.length,
+      roughness / diameter,
+      fluid,
+      kForward,
+      kReverse,
+      colebrook,
+    );
     const from = portNode[fromSlot];
     const to = portNode[toSlot];
     const link = links.length;

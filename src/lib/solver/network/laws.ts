@@ -74,6 +74,31 @@ export interface LawFluid {
 }
 
 /**
+ * Colebrook–White friction factors by (Re, ε/D), shared by the pipe laws of one solve. A
+ * pipe's first turbulent evaluation is at its starting flow of 1 m/s, where Re = ρD/μ is the
+ * same for every pipe of one bore, so pipes of one size and material find the factor once.
+ * The factor is physics/friction `colebrookWhite` of the same arguments, so nothing changes.
+ */
+export class ColebrookMemo {
+  private readonly byRoughness = new Map<number, Map<number, number>>();
+
+  /** colebrookWhite(reynolds, relativeRoughness), found once per distinct pair. */
+  factor(reynolds: number, relativeRoughness: number): number {
+    let byReynolds = this.byRoughness.get(relativeRoughness);
+    if (!byReynolds) {
+      byReynolds = new Map();
+      this.byRoughness.set(relativeRoughness, byReynolds);
+    }
+    let f = byReynolds.get(reynolds);
+    if (f === undefined) {
+      f = colebrookWhite(reynolds, relativeRoughness);
+      byReynolds.set(reynolds, f);
+    }
+    return f;
+  }
+}
+
+/**
  * A pipe: Darcy–Weisbach friction h_f = f (L/D) v|v|/2g with the physics friction factor
  * (Colebrook–White, 64/Re, interpolated transition); in laminar flow the equivalent linear
  * Hagen–Poiseuille form h_f = 32 μ L v /(ρ g D²), which keeps the slope finite and non-zero at
@@ -94,6 +119,7 @@ export class PipeLaw implements LinkLaw {
    * @param fluid density and viscosity
    * @param kForward end-loss K for flow from → to (entrance at `from` plus exit at `to`)
    * @param kReverse end-loss K for flow to → from
+   * @param memo Colebrook–White factors shared by the pipes of one solve, for first evaluations
    */
   constructor(
     readonly diameter: number,
@@ -102,6 +128,7 @@ export class PipeLaw implements LinkLaw {
     private readonly fluid: LawFluid,
     readonly kForward: number,
     readonly kReverse: number,
+    private readonly memo: ColebrookMemo | null = null,
   ) {
     this.area = area(diameter);
     this.initialFlow = this.area * 1; // 1 m/s
@@ -228,7 +255,9 @@ export class PipeLaw implements LinkLaw {
       f =
         start > 0 && re < Infinity
           ? colebrookWhiteFrom(re, this.relativeRoughness, start)
-          : colebrookWhite(re, this.relativeRoughness);
+          : this.memo
+            ? this.memo.factor(re, this.relativeRoughness)
+            : colebrookWhite(re, this.relativeRoughness);
       const x = 1 / Math.sqrt(f);
       const b = 2.51 / re;
       const s = this.relativeRoughness / 3.7 + b * x;

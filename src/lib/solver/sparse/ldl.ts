@@ -125,7 +125,8 @@ export class SparseLdl {
       const start = columnStart[j];
       const end = columnStart[j + 1];
       for (let p = start; p < end; p++) x[rows[p]] = values[p];
-      for (let r = rowStart[j]; r < rowStart[j + 1]; r++) {
+      const rowEnd = rowStart[j + 1];
+      for (let r = rowStart[j]; r < rowEnd; r++) {
         const k = rowColumns[r];
         const p = next[k]; // position of row j in column k (rows ascend, j ascends)
         const ljk = values[p];
