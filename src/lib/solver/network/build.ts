@@ -28,6 +28,7 @@ import {
   portName,
   portsNeedingPipe,
 } from './portSlots';
+import { recordValues } from './recordValues';
 import { twoPortLink, type TwoPortInfo } from './twoPort';
 
 /** A link of the hydraulic graph. */
@@ -124,7 +125,7 @@ function endSlot(
 export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): HydraulicGraph {
   const out: Finding[] = [];
   const rhoG = fluid.density * GRAVITY;
-  const sheetNodes = Object.values(doc.nodes);
+  const sheetNodes = recordValues(doc.nodes);
   const nSheet = sheetNodes.length;
   const nodeIndex = new Map<Id, number>();
   const portStart = new Int32Array(nSheet + 1);
@@ -226,7 +227,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   const pipeList: GraphPipe[] = [];
   const boreCache = new Map<string, number | undefined>();
   const colebrook = new ColebrookMemo();
-  for (const pipe of Object.values(doc.pipes)) {
+  for (const pipe of recordValues(doc.pipes)) {
     const fromIndex = nodeIndex.get(pipe.from.node);
     const toIndex = nodeIndex.get(pipe.to.node);
     const fromSlot = endSlot(sheetNodes, portStart, fromIndex, pipe.from.port);
