@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { colebrookWhite } from '../../src/lib/physics/friction';
 import { colebrookWhiteFrom } from '../../src/lib/solver/network/colebrook';
-import { ColebrookMemo } from '../../src/lib/solver/network/laws';
+import { ColebrookMemo } from '../../src/lib/solver/network/pipeLaw';
 
 // The reference is physics/friction colebrookWhite (Colebrook–White solved from Serghides'
 // estimate to machine precision; its own tests check it against published tables). Started

@@ -19,7 +19,8 @@ import { catalogueInnerDiameter } from '../../physics/pipeCatalogue';
 import type { Finding } from '../types';
 import { findings } from '../findings/catalogue';
 import type { SolveFluid } from '../fluid';
-import { ColebrookMemo, GRAVITY, PipeLaw, type LinkLaw } from './laws';
+import { GRAVITY, type LinkLaw } from './laws';
+import { ColebrookMemo, PipeLaw, PipeLawStore } from './pipeLaw';
 import {
   endCoefficients,
   portCount,
@@ -227,7 +228,9 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   const pipeList: GraphPipe[] = [];
   const boreCache = new Map<string, number | undefined>();
   const colebrook = new ColebrookMemo();
-  for (const pipe of recordValues(doc.pipes)) {
+  const docPipes = recordValues(doc.pipes);
+  const store = new PipeLawStore(docPipes.length);
+  for (const pipe of docPipes) {
     const fromIndex = nodeIndex.get(pipe.from.node);
     const toIndex = nodeIndex.get(pipe.to.node);
     const fromSlot = endSlot(sheetNodes, portStart, fromIndex, pipe.from.port);
@@ -294,6 +297,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       kForward,
       kReverse,
       colebrook,
+      store,
     );
     const from = portNode[fromSlot];
     const to = portNode[toSlot];

@@ -13,7 +13,7 @@
  */
 import { sparseLdlFor } from '../sparse/ldl';
 import type { HydraulicGraph } from './build';
-import { PipeLaw } from './laws';
+import { PipeLaw } from './pipeLaw';
 
 /** Smallest link slope used in the matrix, s/m² (a lossless link at zero flow). */
 export const MIN_SLOPE = 1e-4;
