@@ -46,6 +46,11 @@ export function sparseLdlFor(
   return ldl;
 }
 
+/** Forgets every kept pattern, so the next solve of any sheet orders its matrix afresh (for tests). */
+export function clearPatternCache(): void {
+  patternCache.length = 0;
+}
+
 /** A symmetric sparse matrix pattern (diagonal plus the given off-diagonal pairs), factorised numerically on demand. */
 export class SparseLdl {
   /** Number of unknowns. */
