@@ -106,7 +106,7 @@ export function elementResults(
       elevationFrom: gp.elevationFrom,
       elevationTo: gp.elevationTo,
     };
-    pipes[gp.pipe.id] = result;
+    pipes[gp.id] = result;
     pipeResults[p] = result;
     pipeFlow[p] = result.flow;
     pipeSpeed[p] = Math.abs(result.velocity);
@@ -177,7 +177,7 @@ export function elementResults(
         result.lossCoefficient = clean(link.info.law.lossCoefficient);
       if (link.info?.kind === 'pump') {
         const [suction, discharge] = [ports.suction, ports.discharge];
-        pumps[node.id] = pumpResult(link.info, q, suction, discharge, fluid);
+        pumps[graph.nodeIds[i]] = pumpResult(link.info, q, suction, discharge, fluid);
       }
       if (node.kind === 'control-valve' && link.info?.kind === 'control-valve') {
         const dp = ports.in.pressureAbs - ports.out.pressureAbs;
@@ -188,7 +188,7 @@ export function elementResults(
           fluid.vapourPressure,
           fluid.criticalPressure,
         );
-        controlValves[node.id] = {
+        controlValves[graph.nodeIds[i]] = {
           flow: clean(q),
           pressureDrop: clean(dp),
           opening: node.opening,
@@ -202,7 +202,7 @@ export function elementResults(
         };
       }
     }
-    nodes[node.id] = result;
+    nodes[graph.nodeIds[i]] = result;
     nodeResults[i] = result;
   }
   return {

@@ -29,7 +29,7 @@ import {
   portName,
   portsNeedingPipe,
 } from './portSlots';
-import { recordValues } from './recordValues';
+import { recordKeysAndValues } from './recordValues';
 import { twoPortLink, type TwoPortInfo } from './twoPort';
 
 /** A link of the hydraulic graph. */
@@ -50,6 +50,8 @@ export interface HydraulicLink {
 /** A pipe as the graph sees it. */
 export interface GraphPipe {
   pipe: Pipe;
+  /** The pipe's id (the document record's own key string when it is the same text). */
+  id: Id;
   link: number;
   law: PipeLaw;
   elevationFrom: number;
@@ -74,6 +76,8 @@ export interface HydraulicGraph {
   links: HydraulicLink[];
   /** The document's sheet nodes in document order (Object.values once per solve). */
   sheetNodes: SheetNode[];
+  /** Each sheet node's id (the document record's own key string when it is the same text). */
+  nodeIds: Id[];
   /** 1 for each sheet node (by index in sheetNodes) that takes part in the graph. */
   usable: Uint8Array;
   /**
@@ -126,7 +130,9 @@ function endSlot(
 export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): HydraulicGraph {
   const out: Finding[] = [];
   const rhoG = fluid.density * GRAVITY;
-  const sheetNodes = recordValues(doc.nodes);
+  const { keys: nodeKeys, values: sheetNodes } = recordKeysAndValues(doc.nodes);
+  // Each node's id, as the record's own key string where it is the same text (see recordValues.ts).
+  const nodeIds = sheetNodes.map((node, i) => (nodeKeys[i] === node.id ? nodeKeys[i] : node.id));
   const nSheet = sheetNodes.length;
   const nodeIndex = new Map<Id, number>();
   const portStart = new Int32Array(nSheet + 1);
@@ -228,9 +234,10 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   const pipeList: GraphPipe[] = [];
   const boreCache = new Map<string, number | undefined>();
   const colebrook = new ColebrookMemo();
-  const docPipes = recordValues(doc.pipes);
+  const { keys: pipeKeys, values: docPipes } = recordKeysAndValues(doc.pipes);
   const store = new PipeLawStore(docPipes.length);
-  for (const pipe of docPipes) {
+  for (let d = 0; d < docPipes.length; d++) {
+    const pipe = docPipes[d];
     const fromIndex = nodeIndex.get(pipe.from.node);
     const toIndex = nodeIndex.get(pipe.to.node);
     const fromSlot = endSlot(sheetNodes, portStart, fromIndex, pipe.from.port);
@@ -305,6 +312,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
     links.push({ element: pipe.id, kind: 'pipe', from, to, law, fixedFlow: 0, info: null });
     pipeList.push({
       pipe,
+      id: pipeKeys[d] === pipe.id ? pipeKeys[d] : pipe.id,
       link,
       law,
       elevationFrom: portElevationAt(fromNode, fromLocal),
@@ -367,6 +375,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
     fixedHead: fixedHead.slice(0, nodeCount),
     links,
     sheetNodes,
+    nodeIds,
     usable,
     portStart,
     slotOwner,

@@ -16,9 +16,19 @@ const FAST_MODE_LIMIT = 1020;
 
 /** The record's own enumerable values in Object.values order (integer-like keys first, then insertion order). */
 export function recordValues<T>(record: Record<string, T>): T[] {
+  return recordKeysAndValues(record).values;
+}
+
+/**
+ * The record's keys (Object.keys) and values (Object.values), in the same order. The keys are
+ * the engine's own property-key strings: using them, rather than equal strings found inside the
+ * values (ids in a structured clone are fresh copies), as keys of another record spares the
+ * engine a lookup in its string table for each one.
+ */
+export function recordKeysAndValues<T>(record: Record<string, T>): { keys: string[]; values: T[] } {
   const keys = Object.keys(record);
-  if (keys.length <= FAST_MODE_LIMIT) return Object.values(record);
+  if (keys.length <= FAST_MODE_LIMIT) return { keys, values: Object.values(record) };
   const values = new Array<T>(keys.length);
   for (let i = 0; i < keys.length; i++) values[i] = record[keys[i]];
-  return values;
+  return { keys, values };
 }
