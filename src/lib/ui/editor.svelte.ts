@@ -21,15 +21,20 @@ export interface StatusMessage {
   time: number;
 }
 
-/** Result of a solve tagged with the document revision it belongs to. */
+/** Result of a solve tagged with the document (and its revision) it belongs to. */
 export interface TaggedResult {
   revision: number;
   result: SolveResult;
+  /** The document that was solved: draw results against this, not a newer document. */
+  doc: HeadrouteDocument;
 }
 
 class Editor {
   #history = new History(createDocument('Untitled project'));
   #runner: SolveRunner | null = null;
+  /** Documents sent to the solver and not yet answered, by revision (bookkeeping, not state). */
+  // eslint-disable-next-line svelte/prefer-svelte-reactivity
+  #requested = new Map<number, HeadrouteDocument>();
 
   /** The document; replaced on every change. */
   doc = $state.raw<HeadrouteDocument>(this.#history.doc);
@@ -59,6 +64,8 @@ class Editor {
   );
   /** Latest result even if older than the document (drawn dimmed, marked as updating). */
   readonly lastResult = $derived(this.tagged?.result ?? null);
+  /** The document `lastResult` was solved for (the current one once it has been solved). */
+  readonly solvedDoc = $derived(this.tagged?.doc ?? null);
   readonly solving = $derived(this.tagged === null || this.tagged.revision !== this.revision);
   readonly dirty = $derived(this.revision !== this.savedRevision);
 
@@ -168,12 +175,19 @@ class Editor {
 
   #requestSolve(): void {
     this.#runner ??= createSolveRunner(
-      (tagged) => {
+      ({ revision, result }) => {
+        const doc = this.#requested.get(revision);
+        for (const r of this.#requested.keys()) if (r < revision) this.#requested.delete(r);
         // Keep only the newest revision's result; a late reply for an older one is dropped.
-        if (!this.tagged || tagged.revision >= this.tagged.revision) this.tagged = tagged;
+        if (doc && (!this.tagged || revision >= this.tagged.revision))
+          this.tagged = { revision, result, doc };
       },
-      (message) => this.say(`The solver stopped: ${message}. The sheet stays editable.`, 'error'),
+      (message, revision) => {
+        this.#requested.delete(revision);
+        this.say(`The solver stopped: ${message}. The sheet stays editable.`, 'error');
+      },
     );
+    this.#requested.set(this.revision, this.doc);
     this.#runner.request(this.doc, this.revision, this.caseId);
   }
 

@@ -1,7 +1,12 @@
 /**
- * Runs the solver in a Web Worker when one can be started, in the page otherwise.
- * Requests are coalesced: at most one solve runs at a time and only the newest document waits;
- * each result carries the revision it was solved for, so the editor can drop stale ones.
+ * Runs the solver in the page for small sheets and in a Web Worker for large ones.
+ *
+ * A small sheet (the demo projects solve in a few milliseconds) is solved at once, inside the
+ * edit, so the state update that shows the edit also carries its result: one render, and no
+ * frame with the sheet moved but the results dimmed or the profile drawn from the old result. A large sheet goes to the worker so the page stays
+ * responsive while it solves. Requests are coalesced: at most one solve runs at a time and only
+ * the newest document waits; each result carries the revision it was solved for, so the editor
+ * can drop stale ones.
  */
 import type { HeadrouteDocument, Id } from '../model/types';
 import { solve } from '../solver/solve';
@@ -15,8 +20,16 @@ export interface SolveRunner {
 type Deliver = (tagged: SolveResponse) => void;
 type Fail = (message: string, revision: number) => void;
 
-/** Solve in the page, coalescing requests made in the same task. */
-export function createInlineRunner(deliver: Deliver, fail: Fail): SolveRunner {
+/**
+ * Solve in the page, coalescing requests made in the same task. `observe` hears how long each
+ * solve took (ms, by `now`) and of which document.
+ */
+export function createInlineRunner(
+  deliver: Deliver,
+  fail: Fail,
+  observe?: (ms: number, doc: HeadrouteDocument) => void,
+  now: () => number = () => performance.now(),
+): SolveRunner {
   let pending: SolveRequest | null = null;
   let scheduled = false;
   const run = () => {
@@ -24,8 +37,11 @@ export function createInlineRunner(deliver: Deliver, fail: Fail): SolveRunner {
     const job = pending;
     pending = null;
     if (!job) return;
+    const t0 = now();
     try {
-      deliver({ revision: job.revision, result: solve(job.doc, job.caseId) });
+      const result = solve(job.doc, job.caseId);
+      observe?.(now() - t0, job.doc);
+      deliver({ revision: job.revision, result });
     } catch (error) {
       fail(String(error), job.revision);
     }
@@ -80,14 +96,67 @@ export function createWorkerRunner(worker: Worker, deliver: Deliver, fail: Fail)
   };
 }
 
-/** The runner the app uses: a Worker when the browser can start one. */
+/** Sheets with at most this many nodes and pipes may be solved in the page. */
+export const INLINE_ELEMENT_LIMIT = 400;
+/**
+ * In-page solves slower than this (ms), SLOW_STREAK times in a row, send sheets of that size or
+ * larger to the worker. (One slow solve is normal: the first solve of a sheet also orders its
+ * matrix, and the page's engine is still warming up.)
+ */
+export const INLINE_TIME_LIMIT = 6;
+export const SLOW_STREAK = 3;
+
+/** Nodes plus pipes of a document. */
+export function elementCount(doc: HeadrouteDocument): number {
+  return Object.keys(doc.nodes).length + Object.keys(doc.pipes).length;
+}
+
+/**
+ * Small sheets in the page, large ones in `background` (a worker runner). The size limit starts
+ * at INLINE_ELEMENT_LIMIT and drops below the size of a sheet whose in-page solves took longer
+ * than INLINE_TIME_LIMIT SLOW_STREAK times in a row, so a slow machine or an unusually hard
+ * sheet moves to the worker.
+ * A result from the worker for an older revision than one solved in the page is dropped by the
+ * editor's revision check.
+ */
+export function createAdaptiveRunner(
+  background: SolveRunner,
+  deliver: Deliver,
+  fail: Fail,
+  now: () => number = () => performance.now(),
+): SolveRunner {
+  let limit = INLINE_ELEMENT_LIMIT;
+  let slow = 0;
+  return {
+    request(doc, revision, caseId) {
+      const size = elementCount(doc);
+      if (size > limit) return background.request(doc, revision, caseId);
+      // At once, in the caller's task: the state update that shows the edit carries its result.
+      const t0 = now();
+      let result;
+      try {
+        result = solve(doc, caseId);
+      } catch (error) {
+        return fail(String(error), revision);
+      }
+      slow = now() - t0 > INLINE_TIME_LIMIT ? slow + 1 : 0;
+      if (slow >= SLOW_STREAK) [limit, slow] = [Math.min(limit, size - 1), 0];
+      deliver({ revision, result });
+    },
+    dispose() {
+      background.dispose();
+    },
+  };
+}
+
+/** The runner the app uses: small sheets in the page, large ones in a Worker when possible. */
 export function createSolveRunner(deliver: Deliver, fail: Fail): SolveRunner {
   if (typeof Worker !== 'undefined') {
     try {
       const worker = new Worker(new URL('../solver/worker.ts', import.meta.url), {
         type: 'module',
       });
-      return createWorkerRunner(worker, deliver, fail);
+      return createAdaptiveRunner(createWorkerRunner(worker, deliver, fail), deliver, fail);
     } catch {
       // fall through to solving in the page
     }
