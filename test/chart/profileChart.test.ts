@@ -4,14 +4,38 @@ import { readoutAt } from '../../src/lib/chart/readout';
 import { placeInLanes } from '../../src/lib/chart/labelLanes';
 import { demoDocument, demoProfile, demoResult, station } from './fixtures';
 
-// Paths are written to 3 decimals of a pixel (profileChart sets line().digits(3)), so vertices
-// are compared to 2 decimals.
+// Paths are written to 3 decimals of a pixel (polylinePath), so vertices are compared to 2
+// decimals; straight runs are drawn by their ends, so stations are checked to lie on the line.
 /** Vertices of a d3 line path ("M x,y L x,y …"), one array per sub-path. */
 function vertices(d: string): Array<Array<[number, number]>> {
   return d
     .split('M')
     .filter(Boolean)
     .map((part) => part.split('L').map((p) => p.split(',').map(Number) as [number, number]));
+}
+
+/** Distance from a point to a polyline, px. */
+function offLine(poly: Array<[number, number]>, px: number, py: number): number {
+  let best = Infinity;
+  for (let k = 1; k < poly.length; k++) {
+    const [ax, ay] = poly[k - 1];
+    const [bx, by] = poly[k];
+    const [dx, dy] = [bx - ax, by - ay];
+    const len2 = dx * dx + dy * dy;
+    const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((px - ax) * dx + (py - ay) * dy) / len2));
+    best = Math.min(best, Math.hypot(px - (ax + t * dx), py - (ay + t * dy)));
+  }
+  return best;
+}
+
+/** Every vertex of `poly` is one of the points, in order. */
+function verticesAreStations(poly: Array<[number, number]>, xs: number[], ys: number[]): void {
+  let k = 0;
+  for (const [vx, vy] of poly) {
+    while (k < xs.length && (Math.abs(xs[k] - vx) > 0.01 || Math.abs(ys[k] - vy) > 0.01)) k++;
+    expect(k, `vertex ${vx},${vy} is a station, in order`).toBeLessThan(xs.length);
+    k++;
+  }
 }
 
 const SIZE = { width: 800, height: 400 };
@@ -21,15 +45,19 @@ describe('profileGeometry', () => {
     const profile = demoProfile();
     const g = profileGeometry(profile, SIZE, { system: 'SI' });
     const [hgl] = vertices(g.paths.hgl);
-    expect(hgl).toHaveLength(profile.stations.length);
-    profile.stations.forEach((s, i) => {
-      expect(hgl[i][0]).toBeCloseTo(g.x(s.chainage), 2);
-      expect(hgl[i][1]).toBeCloseTo(g.y(s.hgl), 2);
-    });
+    const xs = profile.stations.map((s) => g.x(s.chainage));
+    const ys = profile.stations.map((s) => g.y(s.hgl));
+    verticesAreStations(hgl, xs, ys);
+    xs.forEach((x, i) => expect(offLine(hgl, x, ys[i])).toBeLessThan(0.06));
+    expect(hgl[0]).toEqual([expect.closeTo(xs[0], 2), expect.closeTo(ys[0], 2)]);
     // The pump's suction and discharge stations share a chainage: a vertical segment upwards.
     const suction = profile.stations.findIndex((s) => s.elementId === 'PU' && s.at === 'node-in');
-    expect(hgl[suction + 1][0]).toBeCloseTo(hgl[suction][0], 2);
-    expect(hgl[suction + 1][1]).toBeLessThan(hgl[suction][1]);
+    const at = (i: number) =>
+      hgl.findIndex(([vx, vy]) => Math.hypot(vx - xs[i], vy - ys[i]) < 0.01);
+    const [before, after] = [at(suction), at(suction + 1)];
+    expect(after).toBe(before + 1);
+    expect(hgl[after][0]).toBeCloseTo(hgl[before][0], 2);
+    expect(hgl[after][1]).toBeLessThan(hgl[before][1]);
     expect(g.steps).toEqual([expect.objectContaining({ elementId: 'PU', direction: 'rise' })]);
   });
 
@@ -38,10 +66,14 @@ describe('profileGeometry', () => {
     const g = profileGeometry(profile, SIZE, { system: 'SI' });
     const pipeStations = profile.stations.filter((s) => s.at !== 'level');
     const [pipe] = vertices(g.paths.pipe);
-    expect(pipe).toHaveLength(pipeStations.length);
-    pipeStations.forEach((s, i) => expect(pipe[i][1]).toBeCloseTo(g.y(s.elevation), 2));
     const [vapour] = vertices(g.paths.vapour);
-    pipeStations.forEach((s, i) => expect(vapour[i][1]).toBeCloseTo(g.y(s.vapourLine), 2));
+    for (const s of pipeStations) {
+      expect(offLine(pipe, g.x(s.chainage), g.y(s.elevation))).toBeLessThan(0.06);
+      expect(offLine(vapour, g.x(s.chainage), g.y(s.vapourLine))).toBeLessThan(0.06);
+    }
+    // The surfaces are not on the lines: both ends of the pipe line are pipe stations.
+    expect(pipe[0][1]).toBeCloseTo(g.y(pipeStations[0].elevation), 2);
+    expect(pipe.at(-1)![1]).toBeCloseTo(g.y(pipeStations.at(-1)!.elevation), 2);
     expect(g.levels.map((l) => l.elementId)).toEqual(['T1', 'T2']);
     expect(g.levels[0].y).toBeCloseTo(g.y(5), 6);
     // Each surface mark starts at its route end and runs into the plot.

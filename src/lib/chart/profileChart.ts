@@ -6,11 +6,12 @@
  * Scales work in display units (the project's unit system); the helpers `x`, `y` and
  * `chainageAt` take and give SI metres so callers never convert by hand.
  */
-import { line, scaleLinear, type ScaleLinear } from 'd3';
+import { scaleLinear, type ScaleLinear } from 'd3';
 import type { Id, NodeKind } from '../model/types';
 import type { Station } from '../solver/types';
 import { displayUnit, fromDisplay, toDisplay } from '../units';
 import { isPipeStation, markedSpans } from './markedSpans';
+import { polylinePath } from './polylinePath';
 import { LINE_GAP, npshNotes, placeLabels, placeSpans } from './profileAnnotations';
 import { groupRuns, levelMarks, nodePlaces, nodeSteps } from './profileMarks';
 import { placeTopNotes } from './topNotes';
@@ -93,12 +94,12 @@ export function profileGeometry(
   const y = (h: number) => yScale(elev(h));
   const elevationAt = (py: number) => fromDisplay(yScale.invert(py), 'elevation', system);
 
+  // Straight runs are drawn by their ends (polylinePath): a long route has many stations.
   const pathOf = (points: readonly Station[], value: (s: Station) => number) =>
-    line<Station>()
-      .digits(3)
-      .defined((s) => Number.isFinite(value(s)) && Number.isFinite(s.chainage))
-      .x((s) => x(s.chainage))
-      .y((s) => y(value(s)))(points) ?? '';
+    polylinePath(
+      points.map((s) => x(s.chainage)),
+      points.map((s) => y(value(s))),
+    );
 
   const paths = {
     pipe: pathOf(pipeLine, (s) => s.elevation),
