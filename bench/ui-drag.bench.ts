@@ -11,6 +11,9 @@
  * instead (unbundled modules, slower); BENCH_SKIP_BUILD=1 serves the existing build/.
  * BENCH_PROFILE=1 also records a Chromium CPU profile during each sheet's drag and prints the
  * functions with the most self time (BENCH_MINIFY=0 builds unminified for readable names).
+ * BENCH_HIDE=<css selector> hides that part of the page during the run (what does it cost?).
+ * BENCH_TRACE=1 records a Chromium trace of each drag and prints main-thread time per move by
+ * kind of work (script, style, layout, paint, commit) and raster time (bench/traceSummary.ts).
  */
 import { chromium, type CDPSession, type Page } from '@playwright/test';
 import { spawn, spawnSync } from 'node:child_process';
@@ -22,11 +25,13 @@ import { findChromium } from '../scripts/browser-path.js';
 import { EXAMPLES } from '../src/lib/model/examples';
 import { serializeProject } from '../src/lib/model/file';
 import { network } from './networks';
+import { TRACE_CATEGORIES, traceLines } from './traceSummary';
 
 const PORT = Number(process.env.BENCH_PORT ?? 4183);
 const MOVES = Number(process.env.BENCH_MOVES ?? 40);
 const DEV = Boolean(process.env.BENCH_DEV);
 const PROFILE = Boolean(process.env.BENCH_PROFILE);
+const TRACE = Boolean(process.env.BENCH_TRACE);
 
 const TYPES: Record<string, string> = {
   '.html': 'text/html',
@@ -205,6 +210,9 @@ const PROBE = `
   if (!window.__samples) {
   window.__samples = [];
   window.__armed = false;
+  window.__frame = 0;
+  const tick = () => { window.__frame++; requestAnimationFrame(tick); };
+  requestAnimationFrame(tick);
   const afterPaint = (cb) => requestAnimationFrame(() => {
     const ch = new MessageChannel();
     ch.port1.onmessage = () => cb();
@@ -213,17 +221,21 @@ const PROBE = `
   window.addEventListener('pointermove', (e) => {
     if (!window.__armed) return;
     const t0 = e.timeStamp;
+    const handled = performance.now();
+    const frame0 = window.__frame;
     const wrap = document.querySelector('.sheet-wrap');
     const moved = new MutationObserver(() => {
       moved.disconnect();
       afterPaint(() => {
-        const sheet = performance.now() - t0;
-        const done = () => afterPaint(() => window.__samples.push({ sheet, solved: performance.now() - t0 }));
-        if (!wrap.classList.contains('stale')) return done();
+        const painted = performance.now();
+        const sheet = painted - t0;
+        const push = (end) => window.__samples.push({ sheet, solved: end - t0, work: end - handled, frames: window.__frame - frame0 });
+        // The frame just painted already showed the result for this revision.
+        if (!wrap.classList.contains('stale')) return push(painted);
         const solved = new MutationObserver(() => {
           if (wrap.classList.contains('stale')) return;
           solved.disconnect();
-          done();
+          afterPaint(() => push(performance.now()));
         });
         solved.observe(wrap, { attributes: true, attributeFilter: ['class'] });
       });
@@ -258,6 +270,8 @@ async function measure(page: Page, label: string, cdp: CDPSession | null) {
     );
   const before = cdp ? await metrics() : null;
   if (cdp) await cdp.send('Profiler.start');
+  const browser = page.context().browser();
+  if (TRACE && browser) await browser.startTracing(page, { categories: TRACE_CATEGORIES });
   for (let i = 1; i <= MOVES; i++) {
     const before = Number(await page.evaluate('window.__samples.length'));
     await page.mouse.move(x + (i % 2 === 1 ? step : 0), y);
@@ -265,6 +279,7 @@ async function measure(page: Page, label: string, cdp: CDPSession | null) {
   }
   await page.evaluate('window.__armed = false');
   const profile = cdp ? (await cdp.send('Profiler.stop')).profile : null;
+  const trace = TRACE && browser ? await browser.stopTracing() : null;
   if (cdp && before) {
     const after = await metrics();
     const names = ['TaskDuration', 'ScriptDuration', 'RecalcStyleDuration', 'LayoutDuration'];
@@ -281,14 +296,24 @@ async function measure(page: Page, label: string, cdp: CDPSession | null) {
   await page.mouse.up();
   const samples = (await page.evaluate(
     '(() => { const s = window.__samples; window.__samples = []; return s; })()',
-  )) as Array<{ sheet: number; solved: number }>;
-  const sheet = samples.map((s) => s.sheet).sort((a, b) => a - b);
-  const solved = samples.map((s) => s.solved).sort((a, b) => a - b);
+  )) as Array<{ sheet: number; solved: number; work: number; frames: number }>;
+  const sorted = (key: 'sheet' | 'solved' | 'work' | 'frames') =>
+    samples.map((s) => s[key]).sort((a, b) => a - b);
+  const [sheet, solved, work, frames] = [
+    sorted('sheet'),
+    sorted('solved'),
+    sorted('work'),
+    sorted('frames'),
+  ];
   const elements = await page.locator('g.node, g.pipe').count();
   const f = (v: number) => v.toFixed(1).padStart(7);
   console.log(
-    `${label.padEnd(44)} ${String(elements).padStart(5)}  ${f(quantile(sheet, 0.5))} ${f(quantile(sheet, 0.95))}   ${f(quantile(solved, 0.5))} ${f(quantile(solved, 0.95))}`,
+    `${label.padEnd(44)} ${String(elements).padStart(5)}  ${f(quantile(sheet, 0.5))} ${f(quantile(sheet, 0.95))}   ${f(quantile(solved, 0.5))} ${f(quantile(solved, 0.95))}   ${f(quantile(work, 0.5))} ${f(quantile(work, 0.95))}   ${f(quantile(frames, 0.5))} ${f(quantile(frames, 0.95))}`,
   );
+  if (trace) {
+    console.log('  main thread and raster per move (Chromium trace):');
+    console.log(traceLines(trace, MOVES).join('\n'));
+  }
   if (profile) {
     console.log('  self time by function:');
     console.log(topSelfTime(profile as never).join('\n'));
@@ -317,11 +342,16 @@ async function measureFloor(page: Page) {
     await page.waitForFunction(`window.__samples.length > ${before}`, null, { timeout: 10_000 });
   }
   await page.evaluate('window.__armed = false');
-  const samples = (await page.evaluate('window.__samples')) as Array<{ sheet: number }>;
+  const samples = (await page.evaluate('window.__samples')) as Array<{
+    sheet: number;
+    work: number;
+  }>;
   const t = samples.map((x) => x.sheet).sort((a, b) => a - b);
+  const w = samples.map((x) => x.work).sort((a, b) => a - b);
   const f = (v: number) => v.toFixed(1).padStart(7);
+  const blank = ''.padStart(7);
   console.log(
-    `${'(floor: bare page, one SVG group moved)'.padEnd(44)} ${'1'.padStart(5)}  ${f(quantile(t, 0.5))} ${f(quantile(t, 0.95))}`,
+    `${'(floor: bare page, one SVG group moved)'.padEnd(44)} ${'1'.padStart(5)}  ${f(quantile(t, 0.5))} ${f(quantile(t, 0.95))}   ${blank} ${blank}   ${f(quantile(w, 0.5))} ${f(quantile(w, 0.95))}`,
   );
 }
 
@@ -368,12 +398,25 @@ async function main() {
     page.on('dialog', (d) => void d.accept().catch(() => undefined));
     await page.goto(url);
     await page.locator('g.node[data-kind="pump"]').first().waitFor({ timeout: 60_000 });
+    // BENCH_HIDE=<css selector> hides part of the page, to see what that part costs per move.
+    if (process.env.BENCH_HIDE)
+      await page.addStyleTag({
+        content: `${process.env.BENCH_HIDE} { display: none !important; }`,
+      });
     await page.evaluate(PROBE);
     console.log(
       `UI drag benchmark (${DEV ? 'vite dev' : 'production build'}): ${MOVES} pointer moves per sheet, times in ms (Chromium, headless)`,
     );
     console.log(
-      `${'sheet'.padEnd(44)} ${'elems'.padStart(5)}  ${'moved p50'.padStart(7)} ${'p95'.padStart(7)}   ${'solved p50'.padStart(7)} ${'p95'.padStart(7)}`,
+      [
+        'moved: input event → frame painted with the node moved; solved: → frame painted with',
+        'the sheet and profile solved for that revision; work: from the handler starting (input',
+        'is delivered at the next frame) to that frame painted; frames: animation frames from',
+        'the handler to the solved paint (1 = the same frame).',
+      ].join('\n'),
+    );
+    console.log(
+      `${'sheet'.padEnd(44)} ${'elems'.padStart(5)}  ${'moved p50'.padStart(7)} ${'p95'.padStart(7)}   ${'solved p50'.padStart(7)} ${'p95'.padStart(7)}   ${'work p50'.padStart(7)} ${'p95'.padStart(7)}   ${'frames p50'.padStart(7)} ${'p95'.padStart(7)}`,
     );
     const bare = await context.newPage();
     await measureFloor(bare);
