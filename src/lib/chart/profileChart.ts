@@ -9,7 +9,7 @@
 import { scaleLinear, type ScaleLinear } from 'd3';
 import type { Id, NodeKind } from '../model/types';
 import type { Station } from '../solver/types';
-import { displayUnit, fromDisplay, toDisplay } from '../units';
+import { displayConverter, displayUnit, fromDisplay } from '../units';
 import { isPipeStation, markedSpans } from './markedSpans';
 import { polylinePath } from './polylinePath';
 import { LINE_GAP, npshNotes, placeLabels, placeSpans } from './profileAnnotations';
@@ -56,8 +56,8 @@ export function profileGeometry(
   const chainageRange = finiteExtent(stations.map((s) => s.chainage)) ?? [0, 1];
   const shown = options.chainageWindow ?? chainageRange;
   const [c0, c1] = shown[1] > shown[0] ? shown : [shown[0], shown[0] + 1];
-  const len = (v: number) => toDisplay(v, 'length', system);
-  const elev = (v: number) => toDisplay(v, 'elevation', system);
+  const len = displayConverter('length', system);
+  const elev = displayConverter('elevation', system);
   const xScale = scaleLinear()
     .domain([len(c0), len(c1)])
     .range([plot.left, plot.left + plot.width]);

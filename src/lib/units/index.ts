@@ -20,6 +20,7 @@ export {
   fromDisplay,
   fromUnit,
   toDisplay,
+  displayConverter,
   toUnit,
   type ConversionContext,
   type ConversionResult,

@@ -3,9 +3,12 @@ import {
   clickedSelection,
   nudgedElevation,
   pannedWindow,
+  pipeSegmentsFor,
+  PROFILE_STATION_BUDGET,
   roundElevation,
   zoomedWindow,
 } from '../../../src/lib/ui/profile/panelMath';
+import { DEFAULT_PIPE_SEGMENTS } from '../../../src/lib/solver/profile';
 
 describe('profile panel arithmetic', () => {
   it('zooming out past the whole route gives the whole route (null)', () => {
@@ -28,5 +31,15 @@ describe('profile panel arithmetic', () => {
     expect(clickedSelection(['a', 'b'], 'c', false)).toEqual(['c']);
     expect(clickedSelection(['a'], 'b', true)).toEqual(['a', 'b']);
     expect(clickedSelection(['a', 'b'], 'a', true)).toEqual(['b']);
+  });
+});
+
+describe('pipeSegmentsFor', () => {
+  it('keeps the default on ordinary routes and thins long ones to the station budget', () => {
+    expect(pipeSegmentsFor(12)).toBe(DEFAULT_PIPE_SEGMENTS);
+    expect(pipeSegmentsFor(0)).toBe(DEFAULT_PIPE_SEGMENTS);
+    expect(pipeSegmentsFor(500)).toBe(PROFILE_STATION_BUDGET / 500);
+    expect(pipeSegmentsFor(500) * 500).toBeLessThanOrEqual(PROFILE_STATION_BUDGET);
+    expect(pipeSegmentsFor(50_000)).toBe(1);
   });
 });

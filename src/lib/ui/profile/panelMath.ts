@@ -4,6 +4,7 @@
  */
 import { isWholeRoute, panWindow, zoomWindow } from '../../chart';
 import type { Id } from '../../model/types';
+import { DEFAULT_PIPE_SEGMENTS } from '../../solver/profile';
 import { fromDisplay, toDisplay, type UnitSystem } from '../../units';
 
 type Window = [number, number];
@@ -44,4 +45,20 @@ export function nudgedElevation(z: number, steps: number, system: UnitSystem): n
 export function clickedSelection(selected: readonly Id[], id: Id, add: boolean): Id[] {
   if (!add) return [id];
   return selected.includes(id) ? selected.filter((s) => s !== id) : [...selected, id];
+}
+
+/** Stations the panel aims for along a whole route (a few per pixel of a wide chart). */
+export const PROFILE_STATION_BUDGET = 2000;
+
+/**
+ * Pieces each pipe is cut into on the profile: the solver's default (10) on ordinary routes,
+ * fewer on routes of hundreds of pipes, where a pipe is a few pixels wide. The grade lines are
+ * straight along a pipe, so fewer interior stations change nothing drawn; spans and readouts
+ * interpolate between stations.
+ */
+export function pipeSegmentsFor(legs: number): number {
+  return Math.max(
+    1,
+    Math.min(DEFAULT_PIPE_SEGMENTS, Math.floor(PROFILE_STATION_BUDGET / Math.max(1, legs))),
+  );
 }
