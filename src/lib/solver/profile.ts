@@ -13,6 +13,7 @@ import { portElevation } from '../model/ports';
 import type { HeadrouteDocument, Id, PortRef, Vessel } from '../model/types';
 import { applyCase } from './applyCase';
 import { GRAVITY } from './network/laws';
+import { vesselGasHead } from './network/nozzleHeads';
 import { routeLegs, type RouteLeg } from './route';
 import type { Profile, SolveResult, Station } from './types';
 
@@ -59,9 +60,14 @@ function station(
   };
 }
 
-/** The liquid surface of a vessel: at rest, HGL = EGL = level + (p_gas − p_atm)/ρg. */
+/**
+ * The liquid surface of a vessel: at rest, HGL = EGL = level + (p_gas − p_atm)/ρg. A pipe that
+ * reaches the vessel through a nozzle above the surface ends at the nozzle with the gas-space
+ * head there (network/nozzleHeads.ts; its last station is the solve's pipe end), and the grade
+ * lines then step down at this station by the liquid's fall from the nozzle to the surface.
+ */
 function levelStation(fluid: StationFluid, vessel: Vessel, chainage: number): Station {
-  const gas = vessel.open ? 0 : (vessel.gasPressureAbs - fluid.atmosphericPressure) / fluid.rhoG;
+  const gas = vesselGasHead(vessel, fluid.atmosphericPressure, fluid.rhoG);
   const head = vessel.liquidLevel + gas;
   return station(fluid, vessel.id, 'level', chainage, vessel.liquidLevel, head, head);
 }

@@ -3,12 +3,14 @@
  *
  * Graph nodes: each port of each sheet node is a node, except that a waypoint's two ports and
  * a junction's hub collapse to one node, and a vessel or a boundary is a single fixed-head node
- * (its liquid surface; its ports all map onto it). Links: each pipe (its ends at vessels and
+ * (its liquid surface; its submerged nozzles all map onto it, while each nozzle above the liquid
+ * is a fixed-head node of its own, see nozzleHeads.ts). Links: each pipe (its ends at vessels and
  * boundaries carry the entrance/exit loss), and each fitting, control valve and pump between
  * its two ports. A pump in duty mode is a flow-controlled link.
  *
  * Fixed heads are total heads of liquid at rest, gauge-referenced (HGL = z + p_gauge/ρg):
- *   vessel: liquid level + (gas pressure − p_atm)/ρg when closed, the level when open;
+ *   vessel: liquid level + (gas pressure − p_atm)/ρg when closed, the level when open; at a
+ *   nozzle above the liquid, the nozzle's elevation in place of the level;
  *   boundary: z + (p − p_atm)/ρg — a header at rest at that pressure: liquid drawn from it
  *   starts with that total head (no entrance loss), liquid delivered into it keeps that
  *   pressure at the pipe end (its velocity head is lost, exit K = 1).
@@ -20,6 +22,7 @@ import type { Finding } from '../types';
 import { findings } from '../findings/catalogue';
 import type { SolveFluid } from '../fluid';
 import { GRAVITY, type LinkLaw } from './laws';
+import { gasSpaceHead, isAboveLevel, vesselGasHead } from './nozzleHeads';
 import { ColebrookMemo, PipeLaw, PipeLawStore } from './pipeLaw';
 import {
   endCoefficients,
@@ -180,7 +183,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
     }
     switch (node.kind) {
       case 'vessel': {
-        const gas = node.open ? 0 : (node.gasPressureAbs - fluid.atmosphericPressure) / rhoG;
+        const gas = vesselGasHead(node, fluid.atmosphericPressure, rhoG);
         const head = node.liquidLevel + gas;
         if (!Number.isFinite(head) || (!node.open && !(node.gasPressureAbs > 0))) {
           out.push(
@@ -194,6 +197,11 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
         }
         const index = newNode(i, head);
         portNode.fill(index, s, portStart[i + 1]);
+        // A nozzle above the liquid opens into the gas space: a fixed head of its own there.
+        const nozzles = node.nozzles;
+        for (let n = 0; n < nozzles.length; n++)
+          if (isAboveLevel(node, nozzles[n]))
+            portNode[s + n] = newNode(i, gasSpaceHead(nozzles[n], gas));
         break;
       }
       case 'boundary': {

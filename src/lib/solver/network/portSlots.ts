@@ -4,6 +4,7 @@
  * text. A sheet node's ports take consecutive slots in the order of model/ports `portsOf`.
  */
 import type { SheetNode } from '../../model/types';
+import { freeDischargeEnd, isAboveLevel } from './nozzleHeads';
 
 /** Port names of the fixed-port kinds, in `portsOf` order (shared, never changed). */
 const SUCTION_DISCHARGE: readonly string[] = ['suction', 'discharge'];
@@ -74,13 +75,19 @@ export function portElevationAt(node: SheetNode, local: number): number {
   return node.kind === 'vessel' ? node.nozzles[local].z : node.z;
 }
 
-/** The vessel nozzle or boundary at a pipe end on port position `local` (their entrance/exit K), null elsewhere. */
+/**
+ * The vessel nozzle or boundary at a pipe end on port position `local` (their entrance/exit K),
+ * null elsewhere. A nozzle above the liquid is a free discharge (nozzleHeads.ts: exit K ≥ 1).
+ */
 export function endCoefficients(
   node: SheetNode,
   local: number,
 ): { entranceK: number; exitK: number } | null {
   if (node.kind === 'boundary') return BOUNDARY_END;
-  if (node.kind === 'vessel') return node.nozzles[local];
+  if (node.kind === 'vessel') {
+    const nozzle = node.nozzles[local];
+    return isAboveLevel(node, nozzle) ? freeDischargeEnd(nozzle) : nozzle;
+  }
   return null;
 }
 
