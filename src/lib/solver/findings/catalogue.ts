@@ -18,6 +18,7 @@ export const FINDING_LEVELS = {
   'control-valve-choked': 'stop',
   'above-design-pressure': 'stop',
   'pump-curve-missing': 'stop',
+  'nozzle-above-level': 'stop',
   'unconnected-port': 'caution',
   'npsh-margin-low': 'caution',
   vacuum: 'caution',
@@ -143,6 +144,20 @@ export const findings = {
       `Pipe ${q(name)}${at(chainage)}: pressure ${fixed(pGauge / 1e5, 2)} bar(g) is above its design pressure ${fixed(design / 1e5, 2)} bar(g).`,
       [id],
       chainage,
+    ),
+  /** Liquid shown leaving a vessel through a nozzle above its liquid surface. */
+  nozzleAboveLevel: (
+    vessel: string,
+    nozzle: string,
+    nozzleZ: number,
+    level: number,
+    pipe: string,
+    elements: Id[],
+  ) =>
+    finding(
+      'nozzle-above-level',
+      `Nozzle ${nozzle} of ${q(vessel)} is above the liquid level (nozzle at ${fixed(nozzleZ, 2)} m, liquid at ${fixed(level, 2)} m): pipe ${q(pipe)} would draw gas, not liquid. The flow shown leaving through it is not physical; lower the nozzle or raise the level.`,
+      elements,
     ),
   pumpCurveMissing: (name: string, id: Id) =>
     finding(

@@ -1,7 +1,8 @@
 /**
  * Sheet-wide findings from a solved network: pressures against vapour pressure, vacuum and
  * design pressure at every pipe end and node port; velocities against the project's guidance;
- * pumps against NPSH and best efficiency; choked control valves; flow regimes and directions.
+ * pumps against NPSH and best efficiency; choked control valves; flow regimes and directions;
+ * liquid leaving a vessel by a nozzle above its level (nozzleLevel.ts).
  * Along a pipe the HGL and the centreline are both straight between the ends, so the lowest
  * and highest pressures of a pipe are at its ends.
  */
@@ -12,6 +13,7 @@ import { portName } from '../network/portSlots';
 import type { ElementResults, IndexedResults } from '../results';
 import type { Finding } from '../types';
 import { findings } from './catalogue';
+import { nozzleLevelFindings } from './nozzleLevel';
 import { DISCHARGE, pipeService, SUCTION } from './service';
 
 /** Best-efficiency band (fraction of BEP flow) outside which a pump gets a caution: 70–120 %, common practice. */
@@ -36,6 +38,8 @@ export function sheetFindings(
       findings.propertyExtrapolated(fluid.liquidName, fluid.extrapolated, fluid.temperature),
     );
   }
+
+  out.push(...nozzleLevelFindings(graph, indexed));
 
   // Nodes: lowest port pressure against vapour pressure; a closed vessel's gas space too.
   const { portStart, portPipeStart } = graph;
