@@ -91,13 +91,16 @@ describe('headroute solve: golden key figures of the demo projects', () => {
   it('branched feed with a minimum-flow return: pump and branch flows', async () => {
     const r = await solveJson('branched-with-recirculation.headroute.json');
     const pump = r.pumps[0];
-    near(pump.flow, 45.9 * M3H);
-    near(pump.head, 31.85);
+    // V-303's inlet N1 (5.5 m) is above its liquid (4 m): its pipe ends at the gas pressure at
+    // the nozzle, not at the liquid head 1.5 m lower (solver/network/nozzleHeads.ts). Before
+    // that fix these were 45.9 m3/h, 31.85 m, NPSHr 2.878 m, branches 6/20/20 m3/h.
+    near(pump.flow, 45.13 * M3H);
+    near(pump.head, 32.28);
     near(pump.npshAvailable, 11.95);
-    near(pump.npshRequired, 2.878);
+    near(pump.npshRequired, 2.811);
     const flows = new Set<number>(r.pipes.map((p: { flow: number }) => Math.round(p.flow / M3H)));
-    expect([...flows].sort((a, b) => a - b)).toEqual([6, 20, 46]);
-    near(r.route.lowestVapourMargin, 116.3e3);
+    expect([...flows].sort((a, b) => a - b)).toEqual([6, 19, 20, 45]);
+    near(r.route.lowestVapourMargin, 116.4e3);
     // Mass balance: the three branches add up to the pump flow.
     const branch = (name: string) => r.pipes.find((p: { name: string }) => p.name === name).flow;
     near(branch('To V-302') + branch('To V-303') + branch('Minimum-flow return'), pump.flow, 1e-9);
