@@ -8,6 +8,8 @@
  *   junction of unequal bores the EGL is common (no junction loss unless a tee fitting is drawn).
  * - Vessels and boundaries are fixed heads of liquid at rest; the entrance/exit K of a vessel
  *   nozzle (a boundary: 0 and 1) is charged to the pipe on it, chosen by the flow direction.
+ *   A nozzle above the liquid meets the gas pressure at its own elevation instead (a fixed head
+ *   of its own, network/nozzleHeads.ts); liquid leaving through one is a stop finding.
  * - Shut valves, stopped pumps, and non-return links (pumps, check valves) against reverse flow
  *   are a stiff linear resistance (laws.ts CLOSED_RESISTANCE): ≤ 1e-8 m³/s per 100 m of head.
  * - A pump in duty mode is a flow-controlled link; its result head is the EGL rise the sheet
