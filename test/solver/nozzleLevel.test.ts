@@ -337,13 +337,19 @@ describe('the demo projects', () => {
     }
   });
 
-  it('siphon demo, case “Pond drawn down to −1.5 m”: the intake at −1 m is above the pond (stop)', () => {
+  it('siphon demo, case “Pond drawn down to −1.5 m”: the intake (−1.7 m) stays covered, no stop', () => {
+    // The demo's intake sat at −1 m until this check showed the drawn-down case uncovering it;
+    // it now sits 0.3 m above the pond bottom (−2 m).
     const doc = load('siphon-over-bund.headroute.json');
     const r = solve(doc, 'C1');
     expectAllFinite(r);
-    const found = r.findings.filter((f) => f.code === 'nozzle-above-level');
-    expect(found.map((f) => f.elements[0])).toEqual(['V1']);
-    expect(found[0].message).toContain('Nozzle N1 of “Pond”');
+    expect(r.findings.filter((f) => f.code === 'nozzle-above-level')).toEqual([]);
+    // Drawn down 1.5 m, the pond drops below the old intake height: that intake would be dry.
+    const old = structuredClone(doc);
+    (old.nodes.V1 as Vessel).nozzles[0].z = -1;
+    const dry = solve(old, 'C1').findings.filter((f) => f.code === 'nozzle-above-level');
+    expect(dry.map((f) => f.elements[0])).toEqual(['V1']);
+    expect(dry[0].message).toContain('Nozzle N1 of “Pond”');
   });
 
   it('branched demo: the pipe into V-303 (inlet 5.5 m over liquid at 4 m, 3 bar abs gas) ends at the gas pressure', () => {

@@ -63,7 +63,11 @@ export interface Nozzle {
   side?: 'left' | 'right';
 }
 
-/** A tank or vessel: a fixed head at its liquid level (plus gas-space pressure if closed). */
+/**
+ * A tank or vessel: a fixed head at its liquid level (plus gas-space pressure if closed). A pipe
+ * through a nozzle above the liquid sees the gas pressure at the nozzle's own height instead
+ * (it discharges into the gas space); drawing liquid out through one is a stop finding.
+ */
 export interface Vessel extends NodeBase {
   kind: 'vessel';
   /** Open to atmosphere, or closed with a gas-space pressure. */
