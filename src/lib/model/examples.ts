@@ -12,8 +12,9 @@
  *   it runs under vacuum (down to −28 kPa(g) at the +14 m road crossing, a caution) and the
  *   crossing is the first point to flash as the temperature rises (from about 91 °C).
  * - siphon-over-bund: 4 m level difference drives about 61 m³/h through 50 m of HDPE (90 mm
- *   bore), the intake 0.3 m above the pond bottom so the drawn-down case keeps it covered; the crest at +5 m sits about 6.2 m below atmospheric pressure (about 40 kPa abs),
- *   well above the 2.3 kPa vapour pressure of water at 20 °C.
+ *   bore), the intake 0.3 m above the pond bottom so the drawn-down case keeps it covered; the
+ *   crest at +5 m sits about 6.2 m below atmospheric pressure (about 40 kPa abs), well above
+ *   the 2.3 kPa vapour pressure of water at 20 °C.
  * - branched-with-recirculation: P-301 gives about 45 m³/h at 32 m (BEP 45 m³/h): 20.2 m³/h to
  *   V-302, 18.6 m³/h to V-303 (its top inlet at 5.5 m discharges into the gas space above the
  *   liquid at 4 m) and 6.3 m³/h back through RO-301 (12 mm bore in 1-1/2", permanent loss
