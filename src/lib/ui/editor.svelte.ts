@@ -8,6 +8,7 @@
 import { History } from '../model/history';
 import type { Command, CommandError } from '../model/commands';
 import { createDocument } from '../model/defaults';
+import { onlySheetPositionsChanged } from '../model/sheetPositions';
 import type { HeadrouteDocument, Id } from '../model/types';
 import type { SolveResult } from '../solver/types';
 import { IDENTITY, type Viewport } from './sheet/viewport';
@@ -25,7 +26,11 @@ export interface StatusMessage {
 export interface TaggedResult {
   revision: number;
   result: SolveResult;
-  /** The document that was solved: draw results against this, not a newer document. */
+  /**
+   * The document that was solved: draw results against this, not a newer document. After a
+   * move on the sheet the result is carried to the new revision and this stays the document
+   * that was solved (positions on the sheet do not enter a solve).
+   */
   doc: HeadrouteDocument;
 }
 
@@ -166,11 +171,25 @@ class Editor {
 
   #sync(): void {
     const h = this.#history;
+    const [before, beforeRevision] = [this.doc, this.revision];
     this.doc = h.doc;
     this.revision = h.revision;
     this.canUndo = h.canUndo;
     this.canRedo = h.canRedo;
-    this.#requestSolve();
+    if (!this.#carryResult(before, beforeRevision)) this.#requestSolve();
+  }
+
+  /**
+   * Parts moved on the sheet and nothing else changed: the hydraulics are the same, so the
+   * result current for the document before holds for this one, with no solve. Returns false
+   * (a solve is needed) otherwise.
+   */
+  #carryResult(before: HeadrouteDocument, beforeRevision: number): boolean {
+    const t = this.tagged;
+    if (!t || t.revision !== beforeRevision || t.result.caseId !== this.caseId) return false;
+    if (!onlySheetPositionsChanged(before, this.doc)) return false;
+    this.tagged = { ...t, revision: this.revision };
+    return true;
   }
 
   #requestSolve(): void {
