@@ -1,7 +1,10 @@
 /**
  * UI benchmark: in Chromium, the time from a pointer move that drags a node to (a) the sheet
- * painted with the node moved and (b) the sheet and profile painted with the solve result for
- * that document revision. Demo projects and a generated sheet of about 1,000 elements.
+ * (or profile) painted with the node moved and (b) the sheet and profile painted with the solve
+ * result for that document revision. Two drags per sheet: a node moved on the sheet (no new
+ * solve is needed: positions on the sheet do not enter the hydraulics) and a waypoint dragged
+ * up and down on the profile (every move is solved). Demo projects and a generated sheet of
+ * about 1,000 elements.
  * Figures are printed (median and 95th percentile), never asserted.
  *
  * Run: npx tsx bench/ui-drag.bench.ts
@@ -240,22 +243,49 @@ const PROBE = `
         solved.observe(wrap, { attributes: true, attributeFilter: ['class'] });
       });
     });
-    moved.observe(document.querySelector('svg.sheet'), { attributes: true, subtree: true, attributeFilter: ['transform'] });
+    const watch = window.__watch || { selector: 'svg.sheet', attribute: 'transform' };
+    moved.observe(document.querySelector(watch.selector), { attributes: true, subtree: true, attributeFilter: [watch.attribute] });
   }, { capture: true });
   }
 `;
 
-async function measure(page: Page, label: string, cdp: CDPSession | null) {
-  // the dev server may have reloaded the page since the last sheet
-  await page.evaluate(PROBE);
-  await page.waitForFunction("!document.querySelector('.sheet-wrap')?.classList.contains('stale')");
+/**
+ * What a drag moves. 'sheet': a node dragged sideways on the sheet (only its place on the sheet
+ * changes, so no solve is needed: the result is carried over). 'profile': a waypoint dragged
+ * up and down on the profile (its elevation changes, so every move is solved and the sheet and
+ * profile redrawn with the new result).
+ */
+type DragKind = 'sheet' | 'profile';
+
+async function dragTarget(page: Page, kind: DragKind) {
+  if (kind === 'profile') {
+    const handle = page.locator('[data-testid="profile-panel"] [data-waypoint]').first();
+    if ((await handle.count()) === 0) return null;
+    const box = (await handle.boundingBox())!;
+    await page.evaluate(
+      `window.__watch = { selector: '[data-testid="profile-panel"] svg.chart', attribute: 'd' }`,
+    );
+    return { x: box.x + box.width / 2, y: box.y + box.height / 2, dx: 0, dy: -8 };
+  }
   await page.keyboard.press('f');
   const node = page.locator('g.node[data-kind="pump"], g.node[data-kind="waypoint"]').first();
   const box = (await node.locator('.symbol').boundingBox())!;
   const k = Number((await page.locator('.zoom-level').textContent())!.replace('%', '')) / 100;
-  const step = 20 * k + 1; // just over one grid step on screen
-  const x = box.x + box.width / 2;
-  const y = box.y + box.height / 2;
+  await page.evaluate(`window.__watch = { selector: 'svg.sheet', attribute: 'transform' }`);
+  // just over one grid step on screen
+  return { x: box.x + box.width / 2, y: box.y + box.height / 2, dx: 20 * k + 1, dy: 0 };
+}
+
+async function measure(page: Page, label: string, cdp: CDPSession | null, kind: DragKind) {
+  // the dev server may have reloaded the page since the last sheet
+  await page.evaluate(PROBE);
+  await page.waitForFunction("!document.querySelector('.sheet-wrap')?.classList.contains('stale')");
+  const target = await dragTarget(page, kind);
+  if (!target) {
+    console.log(`${label.padEnd(62)}   (no waypoint on the route shown)`);
+    return;
+  }
+  const { x, y, dx, dy } = target;
   await page.mouse.move(x, y);
   await page.mouse.down();
   await page.evaluate('window.__armed = true');
@@ -274,7 +304,8 @@ async function measure(page: Page, label: string, cdp: CDPSession | null) {
   if (TRACE && browser) await browser.startTracing(page, { categories: TRACE_CATEGORIES });
   for (let i = 1; i <= MOVES; i++) {
     const before = Number(await page.evaluate('window.__samples.length'));
-    await page.mouse.move(x + (i % 2 === 1 ? step : 0), y);
+    const out = i % 2 === 1 ? 1 : 0;
+    await page.mouse.move(x + out * dx, y + out * dy);
     await page.waitForFunction(`window.__samples.length > ${before}`, null, { timeout: 10_000 });
   }
   await page.evaluate('window.__armed = false');
@@ -308,7 +339,7 @@ async function measure(page: Page, label: string, cdp: CDPSession | null) {
   const elements = await page.locator('g.node, g.pipe').count();
   const f = (v: number) => v.toFixed(1).padStart(7);
   console.log(
-    `${label.padEnd(44)} ${String(elements).padStart(5)}  ${f(quantile(sheet, 0.5))} ${f(quantile(sheet, 0.95))}   ${f(quantile(solved, 0.5))} ${f(quantile(solved, 0.95))}   ${f(quantile(work, 0.5))} ${f(quantile(work, 0.95))}   ${f(quantile(frames, 0.5))} ${f(quantile(frames, 0.95))}`,
+    `${label.padEnd(62)} ${String(elements).padStart(5)}  ${f(quantile(sheet, 0.5))} ${f(quantile(sheet, 0.95))}   ${f(quantile(solved, 0.5))} ${f(quantile(solved, 0.95))}   ${f(quantile(work, 0.5))} ${f(quantile(work, 0.95))}   ${f(quantile(frames, 0.5))} ${f(quantile(frames, 0.95))}`,
   );
   if (trace) {
     console.log('  main thread and raster per move (Chromium trace):');
@@ -351,7 +382,7 @@ async function measureFloor(page: Page) {
   const f = (v: number) => v.toFixed(1).padStart(7);
   const blank = ''.padStart(7);
   console.log(
-    `${'(floor: bare page, one SVG group moved)'.padEnd(44)} ${'1'.padStart(5)}  ${f(quantile(t, 0.5))} ${f(quantile(t, 0.95))}   ${blank} ${blank}   ${f(quantile(w, 0.5))} ${f(quantile(w, 0.95))}`,
+    `${'(floor: bare page, one SVG group moved)'.padEnd(62)} ${'1'.padStart(5)}  ${f(quantile(t, 0.5))} ${f(quantile(t, 0.95))}   ${blank} ${blank}   ${f(quantile(w, 0.5))} ${f(quantile(w, 0.95))}`,
   );
 }
 
@@ -416,7 +447,7 @@ async function main() {
       ].join('\n'),
     );
     console.log(
-      `${'sheet'.padEnd(44)} ${'elems'.padStart(5)}  ${'moved p50'.padStart(7)} ${'p95'.padStart(7)}   ${'solved p50'.padStart(7)} ${'p95'.padStart(7)}   ${'work p50'.padStart(7)} ${'p95'.padStart(7)}   ${'frames p50'.padStart(7)} ${'p95'.padStart(7)}`,
+      `${'sheet'.padEnd(62)} ${'elems'.padStart(5)}  ${'moved p50'.padStart(7)} ${'p95'.padStart(7)}   ${'solved p50'.padStart(7)} ${'p95'.padStart(7)}   ${'work p50'.padStart(7)} ${'p95'.padStart(7)}   ${'frames p50'.padStart(7)} ${'p95'.padStart(7)}`,
     );
     const bare = await context.newPage();
     await measureFloor(bare);
@@ -428,7 +459,8 @@ async function main() {
       await page.getByRole('menuitem', { name: example.title }).click();
       await page.getByLabel('Project name').waitFor();
       await page.waitForTimeout(500);
-      await measure(page, example.title, cdp);
+      await measure(page, `${example.title}: sheet drag`, cdp, 'sheet');
+      await measure(page, `${example.title}: waypoint elevation`, cdp, 'profile');
     }
     if (only && !'generated'.includes(only)) return;
     await page.locator('input[type="file"]').setInputFiles({
@@ -439,7 +471,8 @@ async function main() {
     await page.waitForFunction("document.querySelectorAll('g.node').length > 400", null, {
       timeout: 60_000,
     });
-    await measure(page, 'Generated series, ~1,000 elements', cdp);
+    await measure(page, 'Generated series, 1,000: sheet drag', cdp, 'sheet');
+    await measure(page, 'Generated series, 1,000: waypoint elevation', cdp, 'profile');
     await browser.close();
   } finally {
     stop();
