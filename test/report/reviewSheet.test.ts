@@ -26,7 +26,8 @@ function project(): HeadrouteDocument {
   s.pump('PU', { name: 'Transfer pump', z: 0, x: 150, y: 40 });
   s.fitting('E1', { name: 'Elbow 1', z: 0, x: 250, y: 40 });
   s.node('waypoint', 'W1', { name: 'Rack crossing', z: 12, x: 350, y: -60 });
-  s.vessel('T2', 6, { name: 'Day tank', nozzleZ: 8, x: 500, y: 0 });
+  // Inlet below the liquid (6 m): the line ends at the level, so the rack runs under vacuum.
+  s.vessel('T2', 6, { name: 'Day tank', nozzleZ: 5, x: 500, y: 0 });
   s.pipe('P1', at('T1', 'N1'), at('PU', 'suction'), { length: 6, diameter: 0.08, name: 'Suction' });
   s.pipe('P2', at('PU', 'discharge'), at('E1', 'in'), { length: 5, diameter: 0.065 });
   s.pipe('P3', at('E1', 'out'), at('W1', 'in'), { length: 35, diameter: 0.065 });
