@@ -33,7 +33,7 @@ function project(): HeadrouteDocument {
   s.pipe('P3', at('E1', 'out'), at('W1', 'in'), { length: 35, diameter: 0.065 });
   s.pipe('P4', at('W1', 'out'), at('T2', 'N1'), { length: 30, diameter: 0.065 });
   s.doc.cases = {
-    hot: { id: 'hot', name: 'Hot <i>day</i>', overrides: { temperature: CELSIUS + 95 } },
+    hot: { id: 'hot', name: 'Hot <i>day</i>', overrides: { temperature: CELSIUS + 98 } },
   };
   s.doc.routes = {
     R1: { id: 'R1', name: 'Feed to day tank', nodes: ['T1', 'PU', 'E1', 'W1', 'T2'] },
@@ -151,7 +151,8 @@ describe('reviewSheetHtml', () => {
     }));
     const spans = envelopeSpans(cases);
     const vapour = spans.find((s) => s.kind === 'vapour');
-    // Water at 95 °C over a 12 m rack crossing: under vapour pressure in the hot case only.
+    // Water at 98 °C (vapour pressure 94 kPa, IAPWS-IF97) over a 12 m rack crossing near
+    // 85 kPa abs: under vapour pressure in the hot case only.
     expect(vapour?.worstCaseName).toBe('Hot <i>day</i>');
     expect(html).toContain('<caption>Marked spans across all cases — Feed to day tank</caption>');
     expect(html).toContain('<th>STOP: below vapour pressure</th><td class="num">');
