@@ -39,6 +39,40 @@ function number(text: string | null): number {
   return Number((text ?? '').trim().split(/\s+/)[0]);
 }
 
+/**
+ * Read the pump's flow and NPSHa from its hover readout, save the project, solve the saved
+ * file with the command line, and check the screen agrees: it shows three significant
+ * figures, so within half a unit of the last one.
+ */
+async function expectScreenMatchesCli(page: Page, pump: string, screenshot: string) {
+  await page.locator(`g.node[data-node-id="${pump}"] .symbol`).hover();
+  const readout = page.getByRole('tooltip');
+  await expect(readout).toBeVisible();
+  const value = (label: string) =>
+    readout.locator('dt', { hasText: new RegExp(`^${label}$`) }).locator('+ dd');
+  const shownFlow = number(await value('Flow').textContent());
+  const shownNpsha = number(await value('NPSHa').textContent());
+  await page.screenshot({ path: `e2e/screenshots/${screenshot}` });
+
+  const download = page.waitForEvent('download');
+  await page.keyboard.press('Control+s');
+  const path = await (await download).path();
+  const cli = JSON.parse(
+    execFileSync('node', ['bin/headroute.js', 'solve', path, '--format', 'json'], {
+      encoding: 'utf8',
+    }),
+  );
+  expect(cli.converged).toBe(true);
+  const solved = cli.pumps.find((p: { id: string }) => p.id === pump);
+  const flowM3h = solved.flow * 3600;
+  expect(flowM3h).toBeGreaterThan(0);
+  expect(shownFlow).toBeGreaterThan(0);
+  expect(Math.abs(shownFlow - flowM3h)).toBeLessThanOrEqual(0.005 * flowM3h + 1e-9);
+  expect(Math.abs(shownNpsha - solved.npshAvailable)).toBeLessThanOrEqual(
+    0.005 * solved.npshAvailable + 1e-9,
+  );
+}
+
 test('a route drawn with the mouse solves on screen as the command line solves its file', async ({
   page,
 }) => {
@@ -72,34 +106,8 @@ test('a route drawn with the mouse solves on screen as the command line solves i
   await page.locator('svg.sheet').click({ position: { x: 20, y: 20 } });
   await type(details.getByLabel('Temperature'), '104 F');
 
-  // read the pump's flow and NPSHa from its hover readout
-  await page.locator(`g.node[data-node-id="${pump}"] .symbol`).hover();
-  const readout = page.getByRole('tooltip');
-  await expect(readout).toBeVisible();
-  const value = (label: string) =>
-    readout.locator('dt', { hasText: new RegExp(`^${label}$`) }).locator('+ dd');
-  const shownFlow = number(await value('Flow').textContent());
-  const shownNpsha = number(await value('NPSHa').textContent());
-  await page.screenshot({ path: 'e2e/screenshots/build-route.png' });
-
-  // save and solve the same file with the command line
-  const download = page.waitForEvent('download');
-  await page.keyboard.press('Control+s');
-  const path = await (await download).path();
-  const cli = JSON.parse(
-    execFileSync('node', ['bin/headroute.js', 'solve', path, '--format', 'json'], {
-      encoding: 'utf8',
-    }),
-  );
-  const solved = cli.pumps.find((p: { id: string }) => p.id === pump);
-  expect(cli.converged).toBe(true);
-  // the screen shows three significant figures: agree within half a unit of the last one
-  const flowM3h = solved.flow * 3600;
-  expect(Math.abs(shownFlow - flowM3h)).toBeLessThanOrEqual(0.005 * flowM3h + 1e-9);
-  expect(Math.abs(shownNpsha - solved.npshAvailable)).toBeLessThanOrEqual(
-    0.005 * solved.npshAvailable + 1e-9,
-  );
-  expect(shownFlow).toBeGreaterThan(0);
+  // read the pump's flow and NPSHa from its hover readout; save and solve the same file
+  await expectScreenMatchesCli(page, pump, 'build-route.png');
 });
 
 /** Drag a part onto the sheet and return the id of the node it made. */
@@ -149,29 +157,5 @@ test("demo 1's route drawn with the mouse: tank, strainer, pump, check valve, co
   await page.locator('svg.sheet').click({ position: { x: 20, y: 20 } });
   await type(details.getByLabel('Temperature'), '60 °C');
 
-  await page.locator(`g.node[data-node-id="${pump}"] .symbol`).hover();
-  const readout = page.getByRole('tooltip');
-  await expect(readout).toBeVisible();
-  const value = (label: string) =>
-    readout.locator('dt', { hasText: new RegExp(`^${label}$`) }).locator('+ dd');
-  const shownFlow = number(await value('Flow').textContent());
-  const shownNpsha = number(await value('NPSHa').textContent());
-  await page.screenshot({ path: 'e2e/screenshots/build-demo1-route.png' });
-
-  const download = page.waitForEvent('download');
-  await page.keyboard.press('Control+s');
-  const path = await (await download).path();
-  const cli = JSON.parse(
-    execFileSync('node', ['bin/headroute.js', 'solve', path, '--format', 'json'], {
-      encoding: 'utf8',
-    }),
-  );
-  expect(cli.converged).toBe(true);
-  const solved = cli.pumps.find((p: { id: string }) => p.id === pump);
-  const flowM3h = solved.flow * 3600;
-  expect(flowM3h).toBeGreaterThan(0);
-  expect(Math.abs(shownFlow - flowM3h)).toBeLessThanOrEqual(0.005 * flowM3h + 1e-9);
-  expect(Math.abs(shownNpsha - solved.npshAvailable)).toBeLessThanOrEqual(
-    0.005 * solved.npshAvailable + 1e-9,
-  );
+  await expectScreenMatchesCli(page, pump, 'build-demo1-route.png');
 });
