@@ -22,7 +22,7 @@ import type { Finding } from '../types';
 import { findings } from '../findings/catalogue';
 import type { SolveFluid } from '../fluid';
 import { GRAVITY, type LinkLaw } from './laws';
-import { gasSpaceHead, isAboveLevel, vesselGasHead } from './nozzleHeads';
+import { fixedHeadOf, gasSpaceHead, isAboveLevel } from './nozzleHeads';
 import { ColebrookMemo, PipeLaw, PipeLawStore } from './pipeLaw';
 import {
   endCoefficients,
@@ -182,41 +182,19 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       continue;
     }
     switch (node.kind) {
-      case 'vessel': {
-        const gas = vesselGasHead(node, fluid.atmosphericPressure, rhoG);
-        const head = node.liquidLevel + gas;
-        if (!Number.isFinite(head) || (!node.open && !(node.gasPressureAbs > 0))) {
-          out.push(
-            findings.invalidInput(
-              node.name,
-              'its liquid level or gas pressure is not usable; it is left out of the solve',
-              node.id,
-            ),
-          );
-          continue;
-        }
-        const index = newNode(i, head);
-        portNode.fill(index, s, portStart[i + 1]);
-        // A nozzle above the liquid opens into the gas space: a fixed head of its own there.
-        const nozzles = node.nozzles;
-        for (let n = 0; n < nozzles.length; n++)
-          if (isAboveLevel(node, nozzles[n]))
-            portNode[s + n] = newNode(i, gasSpaceHead(nozzles[n], gas));
-        break;
-      }
+      case 'vessel':
       case 'boundary': {
-        const head = node.z + (node.pressureAbs - fluid.atmosphericPressure) / rhoG;
-        if (!Number.isFinite(head) || !(node.pressureAbs >= 0)) {
-          out.push(
-            findings.invalidInput(
-              node.name,
-              'its pressure is not usable; it is left out of the solve',
-              node.id,
-            ),
-          );
+        const at = fixedHeadOf(node, fluid.atmosphericPressure, rhoG);
+        if ('problem' in at) {
+          out.push(findings.invalidInput(node.name, at.problem, node.id));
           continue;
         }
-        portNode[s] = newNode(i, head);
+        portNode.fill(newNode(i, at.head), s, portStart[i + 1]);
+        // A nozzle above the liquid opens into the gas space: a fixed head of its own there.
+        if (node.kind === 'vessel')
+          for (let n = 0; n < node.nozzles.length; n++)
+            if (isAboveLevel(node, node.nozzles[n]))
+              portNode[s + n] = newNode(i, gasSpaceHead(node.nozzles[n], at.gas));
         break;
       }
       case 'waypoint': {

@@ -15,11 +15,34 @@
  * nozzle would draw gas. The solve still uses the nozzle's head then, and the findings say
  * the flow is not physical (findings/nozzleLevel.ts).
  */
-import type { Nozzle, Vessel } from '../../model/types';
+import type { Boundary, Nozzle, Vessel } from '../../model/types';
 
 /** (p_gas − p_atm)/ρg of a vessel's gas space, m: 0 when it is open to the atmosphere. */
 export function vesselGasHead(vessel: Vessel, atmosphericPressure: number, rhoG: number): number {
   return vessel.open ? 0 : (vessel.gasPressureAbs - atmosphericPressure) / rhoG;
+}
+
+/**
+ * The fixed head of a vessel (liquid level plus gas head) or of a boundary (its elevation plus
+ * its gauge pressure head), m, with the vessel's gas head; or why it cannot be used (the words
+ * go into the invalid-input finding that leaves the element out of the solve).
+ */
+export function fixedHeadOf(
+  node: Vessel | Boundary,
+  atmosphericPressure: number,
+  rhoG: number,
+): { head: number; gas: number } | { problem: string } {
+  if (node.kind === 'boundary') {
+    const head = node.z + (node.pressureAbs - atmosphericPressure) / rhoG;
+    return Number.isFinite(head) && node.pressureAbs >= 0
+      ? { head, gas: 0 }
+      : { problem: 'its pressure is not usable; it is left out of the solve' };
+  }
+  const gas = vesselGasHead(node, atmosphericPressure, rhoG);
+  const head = node.liquidLevel + gas;
+  return Number.isFinite(head) && (node.open || node.gasPressureAbs > 0)
+    ? { head, gas }
+    : { problem: 'its liquid level or gas pressure is not usable; it is left out of the solve' };
 }
 
 /** Whether a nozzle's centreline is above the vessel's liquid surface (it opens into the gas). */
