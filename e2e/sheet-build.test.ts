@@ -39,6 +39,15 @@ function number(text: string | null): number {
   return Number((text ?? '').trim().split(/\s+/)[0]);
 }
 
+/** Open the app (it starts on a demo) and start a new, empty project. */
+async function startEmptySheet(page: Page) {
+  await page.goto('/');
+  await expect(page.locator('g.node')).not.toHaveCount(0, { timeout: 30_000 });
+  await page.getByRole('button', { name: /Project/ }).click();
+  await page.getByRole('menuitem', { name: 'New' }).click();
+  await expect(page.locator('g.node')).toHaveCount(0);
+}
+
 /**
  * Read the pump's flow and NPSHa from its hover readout, save the project, solve the saved
  * file with the command line, and check the screen agrees: it shows three significant
@@ -76,11 +85,7 @@ async function expectScreenMatchesCli(page: Page, pump: string, screenshot: stri
 test('a route drawn with the mouse solves on screen as the command line solves its file', async ({
   page,
 }) => {
-  await page.goto('/');
-  await expect(page.locator('g.node')).not.toHaveCount(0, { timeout: 30_000 });
-  await page.getByRole('button', { name: /Project/ }).click();
-  await page.getByRole('menuitem', { name: 'New' }).click();
-  await expect(page.locator('g.node')).toHaveCount(0);
+  await startEmptySheet(page);
 
   await dragPart(page, 'vessel-open', 160, 320);
   await dragPart(page, 'pump', 420, 380);
@@ -125,11 +130,7 @@ async function place(page: Page, part: string, dx: number, dy: number): Promise<
 test("demo 1's route drawn with the mouse: tank, strainer, pump, check valve, control valve, rack high point, vented receiver", async ({
   page,
 }) => {
-  await page.goto('/');
-  await expect(page.locator('g.node')).not.toHaveCount(0, { timeout: 30_000 });
-  await page.getByRole('button', { name: /Project/ }).click();
-  await page.getByRole('menuitem', { name: 'New' }).click();
-  await expect(page.locator('g.node')).toHaveCount(0);
+  await startEmptySheet(page);
 
   const tank = await place(page, 'vessel-open', 90, 220);
   const strainer = await place(page, 'strainer', 220, 280);
