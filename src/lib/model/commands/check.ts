@@ -99,10 +99,14 @@ export function checkConnection(
   return undefined;
 }
 
-/** Copy `patch` onto `target`: undefined values remove optional fields. */
+/**
+ * Copy `patch` onto `target`: undefined values remove optional fields. A negative zero is
+ * stored as 0: it is the same value, and a saved file (JSON) cannot keep its sign, so the
+ * document would not read back equal.
+ */
 export function assignPatch(target: Record<string, unknown>, patch: Record<string, unknown>) {
   for (const [key, value] of Object.entries(patch)) {
     if (value === undefined) delete target[key];
-    else target[key] = value;
+    else target[key] = Object.is(value, -0) ? 0 : value;
   }
 }
