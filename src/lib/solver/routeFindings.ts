@@ -7,7 +7,7 @@
  * through zero by linear interpolation, and its lowest margin sits at a station.
  */
 import type { HeadrouteDocument, Id } from '../model/types';
-import { findings } from './findings/catalogue';
+import { findingsIn } from './findings/catalogue';
 import type { Finding, Profile, SolveResult, Station } from './types';
 
 /** A stretch of a route where a margin is negative. */
@@ -104,6 +104,7 @@ export function routeFindings(
   prof: Profile,
   name: string = routeName(doc, prof),
 ): Finding[] {
+  const findings = findingsIn(doc.settings.unitSystem);
   const out: Finding[] = [];
   const pv = result.fluid.vapourPressure;
   for (const span of negativeSpans(prof.stations, (s) => s.vapourMargin)) {

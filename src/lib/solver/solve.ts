@@ -18,7 +18,7 @@
  */
 import type { HeadrouteDocument, Id } from '../model/types';
 import { applyCase } from './applyCase';
-import { findings } from './findings/catalogue';
+import { findings, findingsIn } from './findings/catalogue';
 import { sheetFindings } from './findings/sheet';
 import { solveFluid } from './fluid';
 import { buildGraph } from './network/build';
@@ -91,7 +91,12 @@ export function solve(doc: HeadrouteDocument, caseId?: Id | null): SolveResult {
       const worst = outcome.worstLinks.map((k) => graph.links[k].element);
       const names = worst.map((id) => working.nodes[id]?.name ?? working.pipes[id]?.name ?? id);
       result.findings.push(
-        findings.noConvergence(outcome.iterations, outcome.residual, names, worst),
+        findingsIn(working.settings.unitSystem).noConvergence(
+          outcome.iterations,
+          outcome.residual,
+          names,
+          worst,
+        ),
       );
     }
     result.findings.push(

@@ -1,10 +1,13 @@
 /**
  * The one catalogue of findings: stable codes, their level, and the plain-words message of
  * each. Every finding the solver (and the profile along a route) reports is built here.
- * Messages name elements by their names; numbers are SI and rounded for reading.
+ * Messages name elements by their names; numbers are in the project's unit system and rounded
+ * for reading (messageUnits.ts).
  */
 import type { Id } from '../../model/types';
+import type { UnitSystem } from '../../units/quantities';
 import type { Finding, FindingLevel } from '../types';
+import { messageUnits, type MessageUnits } from './messageUnits';
 
 /** Every finding code with its level. Codes are stable: files and tests refer to them. */
 export const FINDING_LEVELS = {
@@ -61,9 +64,9 @@ function list(names: string[], max = 6): string {
   return shown.join(', ') + more;
 }
 
-function at(chainage?: number): string {
+function at(u: MessageUnits, chainage?: number): string {
   return chainage !== undefined && Number.isFinite(chainage)
-    ? ` at chainage ${chainage.toFixed(1)} m`
+    ? ` at chainage ${u.chainage(chainage)}`
     : '';
 }
 
@@ -71,196 +74,211 @@ function fixed(value: number, digits: number): string {
   return Number.isFinite(value) ? value.toFixed(digits) : '–';
 }
 
-/** Message builders, one per code. Each returns a complete Finding. */
-export const findings = {
-  noFixedHead: (elements: Id[]) =>
-    finding(
-      'no-fixed-head',
-      'Nothing on the sheet fixes a head: add a vessel or a boundary so the flows and pressures can be found.',
-      elements,
-    ),
-  cutOff: (names: string[], elements: Id[]) =>
-    finding(
-      'cut-off',
-      `${list(names)} ${names.length === 1 ? 'is' : 'are'} not connected to any vessel or boundary, so ${names.length === 1 ? 'its' : 'their'} pressures cannot be found; connect them or remove them.`,
-      elements,
-    ),
-  brokenConnection: (pipeName: string, end: 'from' | 'to', node: string, port: string, id: Id) =>
-    finding(
-      'broken-connection',
-      `Pipe ${q(pipeName)}: its ${end === 'from' ? 'start' : 'end'} is on port “${port}” of “${node}”, which does not exist; the pipe is left out of the solve.`,
-      [id],
-    ),
-  invalidInput: (name: string, what: string, id: Id) =>
-    finding('invalid-input', `${q(name)}: ${what}.`, [id]),
-  noConvergence: (iterations: number, residual: number, names: string[], elements: Id[]) =>
-    finding(
-      'no-convergence',
-      `The network solve did not settle after ${iterations} iterations (largest head imbalance ${fixed(residual, 4)} m${names.length ? `, worst at ${list(names, 3)}` : ''}); the figures shown are not a solution.`,
-      elements,
-    ),
-  belowVapourPressure: (
-    name: string,
-    where: string,
-    pAbs: number,
-    pv: number,
-    id: Id,
-    chainage?: number,
-  ) =>
-    finding(
-      'below-vapour-pressure',
-      `${q(name)}${where ? ` (${where})` : ''}${at(chainage)}: absolute pressure ${fixed(pAbs / 1000, 1)} kPa is below the vapour pressure ${fixed(pv / 1000, 1)} kPa. The liquid would flash or the column would separate here; the single-liquid-phase results beyond this point are not physical and only indicative.`,
-      [id],
-      chainage,
-    ),
-  npshBelowRequired: (name: string, npsha: number, npshr: number, id: Id) =>
-    finding(
-      'npsh-below-required',
-      `Pump ${q(name)}: NPSH available ${fixed(npsha, 2)} m is below NPSH required ${fixed(npshr, 2)} m; the pump will cavitate.`,
-      [id],
-    ),
-  npshMarginLow: (
-    name: string,
-    npsha: number,
-    npshr: number,
-    ruleRatio: number,
-    ruleMetres: number,
-    id: Id,
-  ) =>
-    finding(
-      'npsh-margin-low',
-      `Pump ${q(name)}: NPSH available ${fixed(npsha, 2)} m against ${fixed(npshr, 2)} m required (ratio ${fixed(npsha / npshr, 2)}, margin ${fixed(npsha - npshr, 2)} m) is inside the project's rule of at least ${fixed(ruleRatio, 2)} × and ${fixed(ruleMetres, 2)} m.`,
-      [id],
-    ),
-  controlValveChoked: (name: string, dp: number, dpChoked: number, id: Id) =>
-    finding(
-      'control-valve-choked',
-      `Control valve ${q(name)}: pressure drop ${fixed(dp / 1000, 1)} kPa exceeds the choked-flow limit ${fixed(dpChoked / 1000, 1)} kPa (IEC 60534-2-1); the flow cannot rise with more drop and the valve will cavitate or flash. The flow shown assumes no choking and is too high.`,
-      [id],
-    ),
-  aboveDesignPressure: (name: string, pGauge: number, design: number, id: Id, chainage?: number) =>
-    finding(
-      'above-design-pressure',
-      `Pipe ${q(name)}${at(chainage)}: pressure ${fixed(pGauge / 1e5, 2)} bar(g) is above its design pressure ${fixed(design / 1e5, 2)} bar(g).`,
-      [id],
-      chainage,
-    ),
-  /** Liquid shown leaving a vessel through a nozzle above its liquid surface. */
-  nozzleAboveLevel: (
-    vessel: string,
-    nozzle: string,
-    nozzleZ: number,
-    level: number,
-    pipe: string,
-    elements: Id[],
-  ) =>
-    finding(
-      'nozzle-above-level',
-      `Nozzle ${nozzle} of ${q(vessel)} is above the liquid level (nozzle at ${fixed(nozzleZ, 2)} m, liquid at ${fixed(level, 2)} m): pipe ${q(pipe)} would draw gas, not liquid. The flow shown leaving through it is not physical; lower the nozzle or raise the level.`,
-      elements,
-    ),
-  pumpCurveMissing: (name: string, id: Id) =>
-    finding(
-      'pump-curve-missing',
-      `Pump ${q(name)} has no usable head curve, so it is treated as shut; give its curve points or run it in duty mode.`,
-      [id],
-    ),
-  unconnectedPort: (name: string, port: string, id: Id) =>
-    finding(
-      'unconnected-port',
-      `${q(name)} has nothing connected to its “${port}” port; it is treated as capped (no flow).`,
-      [id],
-    ),
-  vacuum: (name: string, pGauge: number, id: Id, chainage?: number) =>
-    finding(
-      'vacuum',
-      `Pipe ${q(name)}${at(chainage)} runs under vacuum (${fixed(pGauge / 1000, 1)} kPa(g), the HGL is below the pipe): air can leak in at joints and vents.`,
-      [id],
-      chainage,
-    ),
-  velocityHigh: (name: string, velocity: number, limit: number, suction: boolean, id: Id) =>
-    finding(
-      'velocity-high',
-      `Pipe ${q(name)}: velocity ${fixed(velocity, 2)} m/s is above the project's ${suction ? 'suction' : 'discharge'} guidance of ${fixed(limit, 2)} m/s (common practice).`,
-      [id],
-    ),
-  velocityLow: (name: string, velocity: number, limit: number, id: Id) =>
-    finding(
-      'velocity-low',
-      `Pipe ${q(name)}: velocity ${fixed(velocity, 2)} m/s is below the project's guidance of ${fixed(limit, 2)} m/s (common practice); solids may settle.`,
-      [id],
-    ),
-  pumpOffBep: (name: string, fraction: number, id: Id) =>
-    finding(
-      'pump-off-bep',
-      `Pump ${q(name)} runs at ${fixed(fraction * 100, 0)} % of its best-efficiency flow, outside 70–120 % (common practice): expect more vibration, recirculation or wear.`,
-      [id],
-    ),
-  pumpAtShutoff: (name: string, id: Id) =>
-    finding(
-      'pump-at-shutoff',
-      `Pump ${q(name)} runs but delivers no flow: the head against it is above its shut-off head, or its line is shut. A pump run dead-headed heats up.`,
-      [id],
-    ),
-  propertyExtrapolated: (liquid: string, properties: string[], temperature: number) =>
-    finding(
-      'property-extrapolated',
-      `${liquid}: ${properties.join(', ')} at ${fixed(temperature - 273.15, 1)} °C lies outside the range of its source and is extrapolated.`,
-      [],
-    ),
-  unknownCase: (caseId: string) =>
-    finding('unknown-case', `There is no case “${caseId}”; the base document was solved.`, []),
-  laminarFlow: (name: string, reynolds: number, id: Id) =>
-    finding('laminar-flow', `Pipe ${q(name)}: laminar flow (Re ${fixed(reynolds, 0)}).`, [id]),
-  transitionalFlow: (name: string, reynolds: number, id: Id) =>
-    finding(
-      'transitional-flow',
-      `Pipe ${q(name)}: transitional flow (Re ${fixed(reynolds, 0)}); its friction factor is an interpolation and uncertain.`,
-      [id],
-    ),
-  reversedFlow: (name: string, id: Id) =>
-    finding('reversed-flow', `Pipe ${q(name)}: the flow runs against its drawn direction.`, [id]),
-  nonReturnClosed: (name: string, id: Id) =>
-    finding('non-return-closed', `${q(name)} holds back reverse flow: it is closed (no flow).`, [
-      id,
-    ]),
-  npshrCurveMissing: (name: string, id: Id) =>
-    finding(
-      'npshr-curve-missing',
-      `Pump ${q(name)} has no NPSHr curve; its NPSH margin cannot be checked.`,
-      [id],
-    ),
-  /** A span of a route where p_abs < p_v, located by chainage (the finding's chainage is its start). */
-  routeBelowVapourPressure: (
-    route: string,
-    start: number,
-    end: number,
-    lowestAt: string,
-    lowestMargin: number,
-    lowestChainage: number,
-    pv: number,
-    elements: Id[],
-  ) =>
-    finding(
-      'below-vapour-pressure',
-      `Route ${q(route)}, chainage ${fixed(start, 1)}–${fixed(end, 1)} m: absolute pressure is below the vapour pressure ${fixed(pv / 1000, 1)} kPa, lowest ${fixed(-lowestMargin / 1000, 1)} kPa under it at chainage ${fixed(lowestChainage, 1)} m (${q(lowestAt)}). The liquid would flash or the column would separate here; the single-liquid-phase results beyond this point are not physical and only indicative.`,
-      elements,
-      start,
-    ),
-  /** A span of a route under vacuum (HGL below the pipe), located by chainage. */
-  routeVacuum: (
-    route: string,
-    start: number,
-    end: number,
-    lowestAt: string,
-    lowestGauge: number,
-    lowestChainage: number,
-    elements: Id[],
-  ) =>
-    finding(
-      'vacuum',
-      `Route ${q(route)}, chainage ${fixed(start, 1)}–${fixed(end, 1)} m runs under vacuum (the HGL is below the pipe), down to ${fixed(lowestGauge / 1000, 1)} kPa(g) at chainage ${fixed(lowestChainage, 1)} m (${q(lowestAt)}): air can leak in at joints and vents.`,
-      elements,
-      start,
-    ),
-};
+/**
+ * Message builders, one per code, writing numbers in `system`'s units. Each returns a complete
+ * Finding; quantities are passed in SI.
+ */
+export function findingsIn(system: UnitSystem) {
+  const u = messageUnits(system);
+  return {
+    noFixedHead: (elements: Id[]) =>
+      finding(
+        'no-fixed-head',
+        'Nothing on the sheet fixes a head: add a vessel or a boundary so the flows and pressures can be found.',
+        elements,
+      ),
+    cutOff: (names: string[], elements: Id[]) =>
+      finding(
+        'cut-off',
+        `${list(names)} ${names.length === 1 ? 'is' : 'are'} not connected to any vessel or boundary, so ${names.length === 1 ? 'its' : 'their'} pressures cannot be found; connect them or remove them.`,
+        elements,
+      ),
+    brokenConnection: (pipeName: string, end: 'from' | 'to', node: string, port: string, id: Id) =>
+      finding(
+        'broken-connection',
+        `Pipe ${q(pipeName)}: its ${end === 'from' ? 'start' : 'end'} is on port “${port}” of “${node}”, which does not exist; the pipe is left out of the solve.`,
+        [id],
+      ),
+    invalidInput: (name: string, what: string, id: Id) =>
+      finding('invalid-input', `${q(name)}: ${what}.`, [id]),
+    noConvergence: (iterations: number, residual: number, names: string[], elements: Id[]) =>
+      finding(
+        'no-convergence',
+        `The network solve did not settle after ${iterations} iterations (largest head imbalance ${u.headResidual(residual)}${names.length ? `, worst at ${list(names, 3)}` : ''}); the figures shown are not a solution.`,
+        elements,
+      ),
+    belowVapourPressure: (
+      name: string,
+      where: string,
+      pAbs: number,
+      pv: number,
+      id: Id,
+      chainage?: number,
+    ) =>
+      finding(
+        'below-vapour-pressure',
+        `${q(name)}${where ? ` (${where})` : ''}${at(u, chainage)}: absolute pressure ${u.pressureAbs(pAbs)} is below the vapour pressure ${u.pressureAbs(pv)}. The liquid would flash or the column would separate here; the single-liquid-phase results beyond this point are not physical and only indicative.`,
+        [id],
+        chainage,
+      ),
+    npshBelowRequired: (name: string, npsha: number, npshr: number, id: Id) =>
+      finding(
+        'npsh-below-required',
+        `Pump ${q(name)}: NPSH available ${u.head(npsha)} is below NPSH required ${u.head(npshr)}; the pump will cavitate.`,
+        [id],
+      ),
+    npshMarginLow: (
+      name: string,
+      npsha: number,
+      npshr: number,
+      ruleRatio: number,
+      ruleMetres: number,
+      id: Id,
+    ) =>
+      finding(
+        'npsh-margin-low',
+        `Pump ${q(name)}: NPSH available ${u.head(npsha)} against ${u.head(npshr)} required (ratio ${fixed(npsha / npshr, 2)}, margin ${u.head(npsha - npshr)}) is inside the project's rule of at least ${fixed(ruleRatio, 2)} × and ${u.head(ruleMetres)}.`,
+        [id],
+      ),
+    controlValveChoked: (name: string, dp: number, dpChoked: number, id: Id) =>
+      finding(
+        'control-valve-choked',
+        `Control valve ${q(name)}: pressure drop ${u.pressureDrop(dp)} exceeds the choked-flow limit ${u.pressureDrop(dpChoked)} (IEC 60534-2-1); the flow cannot rise with more drop and the valve will cavitate or flash. The flow shown assumes no choking and is too high.`,
+        [id],
+      ),
+    aboveDesignPressure: (
+      name: string,
+      pGauge: number,
+      design: number,
+      id: Id,
+      chainage?: number,
+    ) =>
+      finding(
+        'above-design-pressure',
+        `Pipe ${q(name)}${at(u, chainage)}: pressure ${u.ratingGauge(pGauge)} is above its design pressure ${u.ratingGauge(design)}.`,
+        [id],
+        chainage,
+      ),
+    /** Liquid shown leaving a vessel through a nozzle above its liquid surface. */
+    nozzleAboveLevel: (
+      vessel: string,
+      nozzle: string,
+      nozzleZ: number,
+      level: number,
+      pipe: string,
+      elements: Id[],
+    ) =>
+      finding(
+        'nozzle-above-level',
+        `Nozzle ${nozzle} of ${q(vessel)} is above the liquid level (nozzle at ${u.elevation(nozzleZ)}, liquid at ${u.elevation(level)}): pipe ${q(pipe)} would draw gas, not liquid. The flow shown leaving through it is not physical; lower the nozzle or raise the level.`,
+        elements,
+      ),
+    pumpCurveMissing: (name: string, id: Id) =>
+      finding(
+        'pump-curve-missing',
+        `Pump ${q(name)} has no usable head curve, so it is treated as shut; give its curve points or run it in duty mode.`,
+        [id],
+      ),
+    unconnectedPort: (name: string, port: string, id: Id) =>
+      finding(
+        'unconnected-port',
+        `${q(name)} has nothing connected to its “${port}” port; it is treated as capped (no flow).`,
+        [id],
+      ),
+    vacuum: (name: string, pGauge: number, id: Id, chainage?: number) =>
+      finding(
+        'vacuum',
+        `Pipe ${q(name)}${at(u, chainage)} runs under vacuum (${u.pressureGauge(pGauge)}, the HGL is below the pipe): air can leak in at joints and vents.`,
+        [id],
+        chainage,
+      ),
+    velocityHigh: (name: string, velocity: number, limit: number, suction: boolean, id: Id) =>
+      finding(
+        'velocity-high',
+        `Pipe ${q(name)}: velocity ${u.velocity(velocity)} is above the project's ${suction ? 'suction' : 'discharge'} guidance of ${u.velocity(limit)} (common practice).`,
+        [id],
+      ),
+    velocityLow: (name: string, velocity: number, limit: number, id: Id) =>
+      finding(
+        'velocity-low',
+        `Pipe ${q(name)}: velocity ${u.velocity(velocity)} is below the project's guidance of ${u.velocity(limit)} (common practice); solids may settle.`,
+        [id],
+      ),
+    pumpOffBep: (name: string, fraction: number, id: Id) =>
+      finding(
+        'pump-off-bep',
+        `Pump ${q(name)} runs at ${fixed(fraction * 100, 0)} % of its best-efficiency flow, outside 70–120 % (common practice): expect more vibration, recirculation or wear.`,
+        [id],
+      ),
+    pumpAtShutoff: (name: string, id: Id) =>
+      finding(
+        'pump-at-shutoff',
+        `Pump ${q(name)} runs but delivers no flow: the head against it is above its shut-off head, or its line is shut. A pump run dead-headed heats up.`,
+        [id],
+      ),
+    propertyExtrapolated: (liquid: string, properties: string[], temperature: number) =>
+      finding(
+        'property-extrapolated',
+        `${liquid}: ${properties.join(', ')} at ${u.temperature(temperature)} lies outside the range of its source and is extrapolated.`,
+        [],
+      ),
+    unknownCase: (caseId: string) =>
+      finding('unknown-case', `There is no case “${caseId}”; the base document was solved.`, []),
+    laminarFlow: (name: string, reynolds: number, id: Id) =>
+      finding('laminar-flow', `Pipe ${q(name)}: laminar flow (Re ${fixed(reynolds, 0)}).`, [id]),
+    transitionalFlow: (name: string, reynolds: number, id: Id) =>
+      finding(
+        'transitional-flow',
+        `Pipe ${q(name)}: transitional flow (Re ${fixed(reynolds, 0)}); its friction factor is an interpolation and uncertain.`,
+        [id],
+      ),
+    reversedFlow: (name: string, id: Id) =>
+      finding('reversed-flow', `Pipe ${q(name)}: the flow runs against its drawn direction.`, [id]),
+    nonReturnClosed: (name: string, id: Id) =>
+      finding('non-return-closed', `${q(name)} holds back reverse flow: it is closed (no flow).`, [
+        id,
+      ]),
+    npshrCurveMissing: (name: string, id: Id) =>
+      finding(
+        'npshr-curve-missing',
+        `Pump ${q(name)} has no NPSHr curve; its NPSH margin cannot be checked.`,
+        [id],
+      ),
+    /** A span of a route where p_abs < p_v, located by chainage (the finding's chainage is its start). */
+    routeBelowVapourPressure: (
+      route: string,
+      start: number,
+      end: number,
+      lowestAt: string,
+      lowestMargin: number,
+      lowestChainage: number,
+      pv: number,
+      elements: Id[],
+    ) =>
+      finding(
+        'below-vapour-pressure',
+        `Route ${q(route)}, chainage ${u.chainageSpan(start, end)}: absolute pressure is below the vapour pressure ${u.pressureAbs(pv)}, lowest ${u.pressureDrop(-lowestMargin)} under it at chainage ${u.chainage(lowestChainage)} (${q(lowestAt)}). The liquid would flash or the column would separate here; the single-liquid-phase results beyond this point are not physical and only indicative.`,
+        elements,
+        start,
+      ),
+    /** A span of a route under vacuum (HGL below the pipe), located by chainage. */
+    routeVacuum: (
+      route: string,
+      start: number,
+      end: number,
+      lowestAt: string,
+      lowestGauge: number,
+      lowestChainage: number,
+      elements: Id[],
+    ) =>
+      finding(
+        'vacuum',
+        `Route ${q(route)}, chainage ${u.chainageSpan(start, end)} runs under vacuum (the HGL is below the pipe), down to ${u.pressureGauge(lowestGauge)} at chainage ${u.chainage(lowestChainage)} (${q(lowestAt)}): air can leak in at joints and vents.`,
+        elements,
+        start,
+      ),
+  };
+}
+
+/** The builders with SI numbers (messages without quantities read the same in both systems). */
+export const findings = findingsIn('SI');

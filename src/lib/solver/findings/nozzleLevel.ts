@@ -8,10 +8,14 @@ import type { HydraulicGraph } from '../network/build';
 import { isAboveLevel } from '../network/nozzleHeads';
 import { NO_FLOW_VELOCITY, type IndexedResults } from '../results';
 import type { Finding } from '../types';
-import { findings } from './catalogue';
+import type { findingsIn } from './catalogue';
 
-/** A stop finding for every pipe through which liquid leaves a vessel by a nozzle above its level. */
-export function nozzleLevelFindings(graph: HydraulicGraph, indexed: IndexedResults): Finding[] {
+/** A stop finding (messages from `findings`) for every pipe through which liquid leaves a vessel by a nozzle above its level. */
+export function nozzleLevelFindings(
+  graph: HydraulicGraph,
+  indexed: IndexedResults,
+  findings: ReturnType<typeof findingsIn>,
+): Finding[] {
   const out: Finding[] = [];
   const { sheetNodes, portStart, portPipeStart, portPipeList, pipeList } = graph;
   for (let i = 0; i < sheetNodes.length; i++) {

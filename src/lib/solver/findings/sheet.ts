@@ -12,7 +12,7 @@ import type { HydraulicGraph } from '../network/build';
 import { portName } from '../network/portSlots';
 import type { ElementResults, IndexedResults } from '../results';
 import type { Finding } from '../types';
-import { findings } from './catalogue';
+import { findingsIn } from './catalogue';
 import { nozzleLevelFindings } from './nozzleLevel';
 import { DISCHARGE, pipeService, SUCTION } from './service';
 
@@ -28,6 +28,7 @@ export function sheetFindings(
   indexed: IndexedResults,
   fluid: SolveFluid,
 ): Finding[] {
+  const findings = findingsIn(settings.unitSystem);
   const out: Finding[] = [];
   const pv = fluid.vapourPressure;
   const pAtm = fluid.atmosphericPressure;
@@ -39,7 +40,7 @@ export function sheetFindings(
     );
   }
 
-  out.push(...nozzleLevelFindings(graph, indexed));
+  out.push(...nozzleLevelFindings(graph, indexed, findings));
 
   // Nodes: lowest port pressure against vapour pressure; a closed vessel's gas space too.
   const { portStart, portPipeStart } = graph;
@@ -143,6 +144,7 @@ function pumpFindings(
   results: ElementResults,
   settings: ProjectSettings,
 ): Finding[] {
+  const findings = findingsIn(settings.unitSystem);
   const out: Finding[] = [];
   const rule = settings.npshMargin;
   const pumpLinks = new Map<Id, number>();
