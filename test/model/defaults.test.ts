@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { addNode, applyCommand } from '../../src/lib/model/commands';
 import { createDocument, createNode, createPipe } from '../../src/lib/model/defaults';
+import { formatQuantity } from '../../src/lib/units/format';
 import { validateDocument } from '../../src/lib/model/file/validate';
 import type { NodeKind } from '../../src/lib/model/types';
 
@@ -59,5 +61,47 @@ describe('defaults', () => {
       expect(n.z).toBeLessThanOrEqual(vessel.z + vessel.height);
     }
     expect(vessel.liquidLevel).toBeGreaterThan(vessel.nozzles[0].z);
+  });
+});
+
+describe('defaults in a project shown in US units', () => {
+  // Display in US units: a new part must read as round figures there (not 32.81 ft).
+  const us = (q: number, quantity: Parameters<typeof formatQuantity>[1]) =>
+    formatQuantity(q, quantity, 'US');
+
+  it('a pipe is 30 ft and a vessel 10 ft of liquid in a 16 ft shell, nozzles at 1 and 15 ft', () => {
+    const pipe = createPipe({ node: 'A', port: 'in' }, { node: 'B', port: 'out' }, 'L1', 'US');
+    expect(us(pipe.length, 'length')).toBe('30 ft');
+    const vessel = createNode('vessel', { x: 0, y: 0 }, 'V1', 'US');
+    if (vessel.kind !== 'vessel') throw new Error('not a vessel');
+    expect(us(vessel.liquidLevel, 'elevation')).toBe('10 ft');
+    expect(us(vessel.height, 'length')).toBe('16 ft');
+    expect(vessel.nozzles.map((n) => us(n.z, 'elevation'))).toEqual(['1 ft', '15 ft']);
+  });
+
+  it('a pump curve reads in gpm and ft, a control valve in Cv, a boundary at 30 psig', () => {
+    const pump = createNode('pump', { x: 0, y: 0 }, 'P1', 'US');
+    if (pump.kind !== 'pump') throw new Error('not a pump');
+    expect(
+      pump.headCurve.map((p) => `${us(p.flow, 'volumeFlow')} @ ${us(p.value, 'head')}`),
+    ).toEqual(['0 gpm @ 100 ft', '45 gpm @ 95 ft', '90 gpm @ 85 ft', '130 gpm @ 65 ft']);
+    expect(us(pump.dutyFlow, 'volumeFlow')).toBe('90 gpm');
+    const best = pump.efficiencyCurve.reduce((a, b) => (b.value > a.value ? b : a));
+    expect(us(best.flow, 'volumeFlow')).toBe('90 gpm');
+    const valve = createNode('control-valve', { x: 0, y: 0 }, 'CV1', 'US');
+    expect(valve).toMatchObject({ coefficientUnit: 'Cv', ratedCoefficient: 73 });
+    const boundary = createNode('boundary', { x: 0, y: 0 }, 'B1', 'US');
+    if (boundary.kind !== 'boundary') throw new Error('not a boundary');
+    expect(formatQuantity(boundary.pressureAbs - 101_325, 'pressureGauge', 'US')).toBe('30 psig');
+  });
+
+  it('the commands place US defaults when the project shows US units', () => {
+    const doc = createDocument('US');
+    doc.settings.unitSystem = 'US';
+    const placed = applyCommand(doc, addNode('vessel', { x: 0, y: 0 }));
+    if (!placed.ok) throw new Error(placed.error.message);
+    expect(us((placed.doc.nodes.V1 as { liquidLevel: number }).liquidLevel, 'elevation')).toBe(
+      '10 ft',
+    );
   });
 });

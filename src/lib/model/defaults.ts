@@ -3,8 +3,13 @@
  * is connected: a 2" Sch 40 carbon-steel pipe 10 m long; a small end-suction water pump of about
  * 30 m shut-off head with its best efficiency near 20 m³/h at 2900 rpm; open tanks with an outlet
  * nozzle near the bottom and an inlet near the top. Values are invented, typical of the trade.
+ *
+ * A part placed in a project shown in US units gets round values in those units (a 30 ft pipe,
+ * a 10 ft level, a pump curve in gpm and ft, a Cv valve, a 30 psig header) rather than metric
+ * defaults that would read as 32.81 ft or 9.843 ft. Inside they are SI like everything else.
  */
 import { CURRENT_VERSION } from './file/version';
+import type { UnitSystem } from '../units/quantities';
 import type {
   Boundary,
   ControlValve,
@@ -29,6 +34,89 @@ export const STANDARD_ATMOSPHERE = 101_325;
 export const ZERO_CELSIUS = 273.15;
 
 const M3H = 1 / 3600; // one m³/h in m³/s
+// Exact conversion factors, NIST SP 811 (2008) Appendix B.8: ft = 0.3048 m, US gal = 231 in³,
+// psi = lbf/in² with lbf = 0.45359237 kg × 9.80665 m/s².
+const FT = 0.3048;
+const GPM = (231 * 0.0254 ** 3) / 60; // one US gal/min in m³/s
+const PSI = (0.45359237 * 9.80665) / 0.0254 ** 2;
+
+/** Round default values of new parts, per display unit system (SI values). */
+interface PartDefaults {
+  pipeLength: number;
+  vesselLevel: number;
+  vesselHeight: number;
+  outletZ: number;
+  inletZ: number;
+  /** [flow m³/s, value] rows for the head, NPSHr and efficiency curves, and the duty flow. */
+  head: Array<[number, number]>;
+  npshr: Array<[number, number]>;
+  efficiency: Array<[number, number]>;
+  dutyFlow: number;
+  valve: { ratedCoefficient: number; coefficientUnit: 'Kv' | 'Cv' };
+  boundaryGauge: number;
+}
+
+const SI_DEFAULTS: PartDefaults = {
+  pipeLength: 10,
+  vesselLevel: 3,
+  vesselHeight: 5,
+  outletZ: 0.3,
+  inletZ: 4.5,
+  head: [
+    [0, 30],
+    [10 * M3H, 29],
+    [20 * M3H, 26],
+    [30 * M3H, 20],
+  ],
+  npshr: [
+    [5 * M3H, 1.5],
+    [20 * M3H, 2.2],
+    [30 * M3H, 3.5],
+  ],
+  efficiency: [
+    [5 * M3H, 0.35],
+    [10 * M3H, 0.55],
+    [20 * M3H, 0.68],
+    [30 * M3H, 0.6],
+  ],
+  dutyFlow: 20 * M3H,
+  valve: { ratedCoefficient: 63, coefficientUnit: 'Kv' },
+  // A header at about 2 barg (sea level): plausible as a supply or as a delivery point.
+  boundaryGauge: 2e5,
+};
+
+/** The same pieces of plant in round US figures (about the SI defaults). */
+const US_DEFAULTS: PartDefaults = {
+  pipeLength: 30 * FT,
+  vesselLevel: 10 * FT,
+  vesselHeight: 16 * FT,
+  outletZ: 1 * FT,
+  inletZ: 15 * FT,
+  head: [
+    [0, 100 * FT],
+    [45 * GPM, 95 * FT],
+    [90 * GPM, 85 * FT],
+    [130 * GPM, 65 * FT],
+  ],
+  npshr: [
+    [20 * GPM, 5 * FT],
+    [90 * GPM, 7 * FT],
+    [130 * GPM, 11.5 * FT],
+  ],
+  efficiency: [
+    [20 * GPM, 0.35],
+    [45 * GPM, 0.55],
+    [90 * GPM, 0.68],
+    [130 * GPM, 0.6],
+  ],
+  dutyFlow: 90 * GPM,
+  valve: { ratedCoefficient: 73, coefficientUnit: 'Cv' },
+  boundaryGauge: 30 * PSI,
+};
+
+function partDefaults(system: UnitSystem): PartDefaults {
+  return system === 'US' ? US_DEFAULTS : SI_DEFAULTS;
+}
 
 /** Default project settings: water at 20 °C at sea level, SI display. */
 export function defaultSettings(): ProjectSettings {
@@ -59,12 +147,21 @@ export function createDocument(name: string): HeadrouteDocument {
   };
 }
 
-function points(rows: Array<[flowM3h: number, value: number]>): PumpPoint[] {
-  return rows.map(([q, value]) => ({ flow: q * M3H, value }));
+function points(rows: Array<[flow: number, value: number]>): PumpPoint[] {
+  return rows.map(([flow, value]) => ({ flow, value }));
 }
 
-/** A new node of `kind` at sheet position `at`, with id `id` (also its first name). */
-export function createNode(kind: NodeKind, at: { x: number; y: number }, id: Id): SheetNode {
+/**
+ * A new node of `kind` at sheet position `at`, with id `id` (also its first name), with round
+ * default values in the units of `system`.
+ */
+export function createNode(
+  kind: NodeKind,
+  at: { x: number; y: number },
+  id: Id,
+  system: UnitSystem = 'SI',
+): SheetNode {
+  const d = partDefaults(system);
   const base = { id, name: id, x: at.x, y: at.y, z: 0 };
   switch (kind) {
     case 'vessel':
@@ -73,40 +170,26 @@ export function createNode(kind: NodeKind, at: { x: number; y: number }, id: Id)
         kind,
         open: true,
         gasPressureAbs: STANDARD_ATMOSPHERE,
-        liquidLevel: 3,
-        height: 5,
+        liquidLevel: d.vesselLevel,
+        height: d.vesselHeight,
         nozzles: [
           // Entrance K 0.5 (sharp-edged) and exit K 1.0: common handbook values, from memory.
-          { id: 'N1', z: 0.3, entranceK: 0.5, exitK: 1 },
-          { id: 'N2', z: 4.5, entranceK: 0.5, exitK: 1 },
+          { id: 'N1', z: d.outletZ, entranceK: 0.5, exitK: 1 },
+          { id: 'N2', z: d.inletZ, entranceK: 0.5, exitK: 1 },
         ],
       } satisfies Vessel;
     case 'pump':
       return {
         ...base,
         kind,
-        headCurve: points([
-          [0, 30],
-          [10, 29],
-          [20, 26],
-          [30, 20],
-        ]),
-        npshrCurve: points([
-          [5, 1.5],
-          [20, 2.2],
-          [30, 3.5],
-        ]),
-        efficiencyCurve: points([
-          [5, 0.35],
-          [10, 0.55],
-          [20, 0.68],
-          [30, 0.6],
-        ]),
+        headCurve: points(d.head),
+        npshrCurve: points(d.npshr),
+        efficiencyCurve: points(d.efficiency),
         ratedSpeed: 2900,
         speed: 2900,
         running: true,
         mode: 'rating',
-        dutyFlow: 20 * M3H,
+        dutyFlow: d.dutyFlow,
       } satisfies Pump;
     case 'fitting':
       return {
@@ -122,8 +205,7 @@ export function createNode(kind: NodeKind, at: { x: number; y: number }, id: Id)
       return {
         ...base,
         kind,
-        ratedCoefficient: 63,
-        coefficientUnit: 'Kv',
+        ...d.valve,
         characteristic: 'equal-percentage',
         rangeability: 50,
         opening: 0.7,
@@ -134,20 +216,23 @@ export function createNode(kind: NodeKind, at: { x: number; y: number }, id: Id)
     case 'junction':
       return { ...base, kind } satisfies Junction;
     case 'boundary':
-      // A header at about 2 barg (sea level): plausible as a supply or as a delivery point.
-      return { ...base, kind, pressureAbs: STANDARD_ATMOSPHERE + 2e5 } satisfies Boundary;
+      return {
+        ...base,
+        kind,
+        pressureAbs: STANDARD_ATMOSPHERE + d.boundaryGauge,
+      } satisfies Boundary;
   }
 }
 
-/** A new pipe from `from` to `to` with id `id`: 2" Sch 40 carbon steel, 10 m. */
-export function createPipe(from: PortRef, to: PortRef, id: Id): Pipe {
+/** A new pipe from `from` to `to` with id `id`: 2" Sch 40 carbon steel, 10 m (30 ft in US units). */
+export function createPipe(from: PortRef, to: PortRef, id: Id, system: UnitSystem = 'SI'): Pipe {
   return {
     id,
     kind: 'pipe',
     name: id,
     from: { ...from },
     to: { ...to },
-    length: 10,
+    length: partDefaults(system).pipeLength,
     bore: { mode: 'catalogue', nominalSize: '2', schedule: '40' },
     material: 'carbon-steel',
     roughness: null,
