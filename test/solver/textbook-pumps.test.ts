@@ -25,8 +25,8 @@
  *   by 2.31 ft/psi divided by the specific gravity 0.985, which is the same as a density of
  *   0.985 × psi/(g × 2.31 ft) = 983.58 kg/m³; its vapour pressure is the printed 2.889 psia.
  *   (IAPWS-IF97 at 60 °C, via python3-iapws 1.5.2: ρ = 983.18 kg/m³, p_v = 19.946 kPa against
- *   the book's 19.919 kPa; a difference of about 0.01 m of NPSH, which is why the book's
- *   values are used instead.)
+ *   the book's 19.919 kPa; (p_atm − p_v)/ρg then differs by 0.6 mm (0.002 ft). The book's own
+ *   figures are used so that each printed head is reproduced term by term.)
  * - The site atmospheric pressure is overridden to the printed 14.7 psia.
  * - "6 inch line": the book's friction table is for new Schedule 40 steel pipe (the book says
  *   so in its section 3.6), inner diameter 6.065 in (ASME B36.10M, from memory); the printed
