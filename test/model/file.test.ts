@@ -9,7 +9,7 @@ import {
   projectFileName,
   serializeProject,
 } from '../../src/lib/model/file';
-import { addCase, addRoute, updateNode, updatePipe } from '../../src/lib/model/commands';
+import { addCase, addNode, addRoute, updateNode, updatePipe } from '../../src/lib/model/commands';
 import { build, sampleDocument } from './helpers';
 
 const draftV0 = readFileSync(
@@ -36,6 +36,18 @@ describe('project file round trip', () => {
     expect(result.document).toEqual(doc);
     expect(result.migratedFrom).toBeUndefined();
     expect(serializeProject(result.document)).toBe(serializeProject(doc));
+  });
+
+  it('a boundary holding a flow keeps what it holds, its flow and its pressure', () => {
+    const doc = build(
+      sampleDocument(),
+      addNode('boundary', { x: 400, y: 0 }, { id: 'B9', holds: 'flow', outflow: -0.0025 }),
+    );
+    const result = parseProjectFile(serializeProject(doc));
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(result.document).toEqual(doc);
+    expect(result.document.nodes.B9).toMatchObject({ holds: 'flow', outflow: -0.0025 });
   });
 
   it('unknown extra fields are dropped, not kept', () => {

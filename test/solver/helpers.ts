@@ -46,6 +46,11 @@ export class Sheet {
     return this.node<Boundary>('boundary', id, { z, pressureAbs });
   }
 
+  /** A boundary holding a flow: `outflow` m³/s leaves the sheet there (negative enters). */
+  drawOff(id: Id, z: number, outflow: number): Boundary {
+    return this.node<Boundary>('boundary', id, { z, holds: 'flow', outflow });
+  }
+
   pump(id: Id, props: Partial<Pump> = {}): Pump {
     return this.node<Pump>('pump', id, props);
   }
@@ -118,7 +123,13 @@ export function expectConservation(doc: HeadrouteDocument, result: SolveResult):
   }
   for (const [key, q] of net) {
     const nodeId = key.split('/')[0];
-    const kind = doc.nodes[nodeId].kind;
+    const node = doc.nodes[nodeId];
+    // A boundary holding a flow takes exactly that flow out of the sheet.
+    if (node.kind === 'boundary' && node.holds === 'flow') {
+      expect(Math.abs(q - (node.outflow ?? 0)), `outflow at ${key}`).toBeLessThan(1e-9);
+      continue;
+    }
+    const kind = node.kind;
     if (kind === 'vessel' || kind === 'boundary') continue;
     expect(Math.abs(q), `continuity at ${key}`).toBeLessThan(1e-9);
   }

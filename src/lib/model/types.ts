@@ -183,11 +183,19 @@ export interface Junction extends NodeBase {
   kind: 'junction';
 }
 
-/** A fixed pressure at a point (a header, a battery limit). Port: 'p'. */
+/**
+ * Where the sheet meets plant that is not drawn (a header, a battery limit, a consumer). It
+ * holds either a pressure (the default) or a flow: a draw-off of known flow to a user not on
+ * the sheet (positive outflow) or a supply of known flow into it (negative). Port: 'p'.
+ */
 export interface Boundary extends NodeBase {
   kind: 'boundary';
-  /** Fixed pressure, Pa abs. */
+  /** Fixed pressure, Pa abs (kept, unused, while the boundary holds a flow). */
   pressureAbs: number;
+  /** What the boundary fixes; absent means 'pressure'. */
+  holds?: 'pressure' | 'flow';
+  /** Flow leaving the sheet here while it holds a flow, m³/s; negative enters the sheet. */
+  outflow?: number;
 }
 
 /** Any node on the sheet. */

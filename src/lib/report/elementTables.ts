@@ -215,14 +215,17 @@ export function pumpsTable(doc: HeadrouteDocument, result: SolveResult, fmt: For
 }
 
 function vesselInputs(n: SheetNode, fmt: Formatter): string {
-  if (n.kind === 'boundary') return `fixed ${fmt.q(n.pressureAbs, 'pressureAbs')}`;
+  if (n.kind === 'boundary')
+    return n.holds === 'flow'
+      ? `fixed outflow ${fmt.q(n.outflow ?? 0, 'volumeFlow')}`
+      : `fixed ${fmt.q(n.pressureAbs, 'pressureAbs')}`;
   if (n.kind !== 'vessel') return '';
   const gas = n.open ? 'open' : `closed, gas ${fmt.q(n.gasPressureAbs, 'pressureAbs')}`;
   const nozzles = n.nozzles.map((z) => `${z.id} at ${fmt.q(z.z, 'elevation')}`).join(', ');
   return `${gas}; level ${fmt.q(n.liquidLevel, 'elevation')}; bottom ${fmt.q(n.z, 'elevation')}; nozzles ${nozzles}`;
 }
 
-/** Vessels and fixed-pressure boundaries: inputs and the pressure and flow at each port. */
+/** Vessels and boundaries: inputs and the pressure and flow at each port. */
 export function vesselsTable(doc: HeadrouteDocument, result: SolveResult, fmt: Formatter): string {
   const rows: Cell[][] = [];
   for (const n of Object.values(doc.nodes)) {

@@ -134,7 +134,7 @@ function shape(n: SheetNode): string {
     case 'junction':
       return `<circle cx="${f(x)}" cy="${f(y)}" r="4" fill="${INK}"/>`;
     case 'boundary':
-      return `<rect x="${f(x - 10)}" y="${f(y - 10)}" width="20" height="20" ${line}/><text x="${f(x)}" y="${f(y + 4)}" text-anchor="middle" font-size="11" font-weight="700">P</text>`;
+      return `<rect x="${f(x - 10)}" y="${f(y - 10)}" width="20" height="20" ${line}/><text x="${f(x)}" y="${f(y + 4)}" text-anchor="middle" font-size="11" font-weight="700">${n.holds === 'flow' ? 'Q' : 'P'}</text>`;
   }
 }
 

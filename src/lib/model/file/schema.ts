@@ -146,6 +146,8 @@ const BoundarySchema = v.object({
   ...nodeBase,
   kind: v.literal('boundary'),
   pressureAbs: positive,
+  holds: v.optional(v.picklist(['pressure', 'flow'])),
+  outflow: v.optional(finite),
 });
 
 /** Any node, told apart by `kind`. */

@@ -14,6 +14,8 @@
  *   boundary: z + (p − p_atm)/ρg — a header at rest at that pressure: liquid drawn from it
  *   starts with that total head (no entrance loss), liquid delivered into it keeps that
  *   pressure at the pipe end (its velocity head is lost, exit K = 1).
+ * A boundary that holds a flow is a free node with a known demand (the flow leaving the sheet
+ * there; Todini and Pilati's node demand q), and its pipe end has no entrance or exit loss.
  */
 import type { HeadrouteDocument, Id, Pipe, SheetNode } from '../../model/types';
 import { findPipeMaterial, DEFAULT_MATERIAL, PIPE_MATERIALS } from '../../physics/materials';
@@ -76,6 +78,8 @@ export interface HydraulicGraph {
   fixed: Uint8Array;
   /** Fixed total head, m, for fixed nodes (0 for free ones). */
   fixedHead: Float64Array;
+  /** Known flow leaving the sheet at each node, m³/s (a boundary holding a flow; else 0). */
+  demand: Float64Array;
   links: HydraulicLink[];
   /** The document's sheet nodes in document order (Object.values once per solve). */
   sheetNodes: SheetNode[];
@@ -156,6 +160,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
   const capacity = nSlots + nSheet;
   const fixed = new Uint8Array(capacity);
   const fixedHead = new Float64Array(capacity);
+  const demand = new Float64Array(capacity);
   const nodeOwner = new Int32Array(capacity);
   let nodeCount = 0;
   const newNode = (owner: number, head: number | null): number => {
@@ -184,6 +189,22 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
     switch (node.kind) {
       case 'vessel':
       case 'boundary': {
+        if (node.kind === 'boundary' && node.holds === 'flow') {
+          const outflow = node.outflow ?? 0;
+          if (!Number.isFinite(outflow)) {
+            out.push(
+              findings.invalidInput(
+                node.name,
+                'its flow is not a number; it is left out of the solve',
+                node.id,
+              ),
+            );
+            continue;
+          }
+          portNode[s] = newNode(i, null);
+          demand[portNode[s]] = outflow;
+          break;
+        }
         const at = fixedHeadOf(node, fluid.atmosphericPressure, rhoG);
         if ('problem' in at) {
           out.push(findings.invalidInput(node.name, at.problem, node.id));
@@ -359,6 +380,7 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
     nodeCount,
     fixed: fixed.slice(0, nodeCount),
     fixedHead: fixedHead.slice(0, nodeCount),
+    demand: demand.slice(0, nodeCount),
     links,
     sheetNodes,
     nodeIds,

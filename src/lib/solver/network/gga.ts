@@ -205,6 +205,9 @@ export function gradientSolve(
 
     diagonal.fill(0);
     rhs.fill(0);
+    // Known demands (a boundary holding a flow) leave their node, as a duty link's flow does.
+    for (let i = 0; i < graph.nodeCount; i++)
+      if (graph.demand[i] !== 0 && freeIndex[i] >= 0) rhs[freeIndex[i]] -= graph.demand[i];
     for (let i = 0; i < active.length; i++) {
       const k = active[i];
       const a = freeFrom[k];
@@ -274,7 +277,9 @@ export function massImbalance(
   activeLink: Uint8Array,
   flows: Float64Array,
 ): number {
+  // Flow in minus flow out at each node, less the demand taken there.
   const balance = new Float64Array(graph.nodeCount);
+  for (let i = 0; i < graph.nodeCount; i++) balance[i] = -graph.demand[i];
   graph.links.forEach((link, k) => {
     if (!activeLink[k]) return;
     balance[link.from] -= flows[k];

@@ -83,7 +83,7 @@ export function endCoefficients(
   node: SheetNode,
   local: number,
 ): { entranceK: number; exitK: number } | null {
-  if (node.kind === 'boundary') return BOUNDARY_END;
+  if (node.kind === 'boundary') return node.holds === 'flow' ? null : BOUNDARY_END;
   if (node.kind === 'vessel') {
     const nozzle = node.nozzles[local];
     return isAboveLevel(node, nozzle) ? freeDischargeEnd(nozzle) : nozzle;

@@ -21,6 +21,12 @@ export const FITTING_TYPES: ReadonlyArray<readonly [FittingType, string]> = [
   ['restriction-orifice', 'Restriction orifice'],
 ];
 
+/** What a boundary holds. */
+export const BOUNDARY_HOLDS: ReadonlyArray<readonly ['pressure' | 'flow', string]> = [
+  ['pressure', 'A pressure (a header)'],
+  ['flow', 'A flow (a draw-off or a supply)'],
+];
+
 export const LOSS_METHODS: ReadonlyArray<readonly [LossMethod, string]> = [
   ['fixed', 'Fixed K'],
   ['2K', '2-K (Hooper)'],

@@ -11,6 +11,7 @@ export type SymbolKey =
   | 'waypoint'
   | 'junction'
   | 'boundary'
+  | 'boundary-flow'
   | 'pipe'
   | FittingType;
 
@@ -21,6 +22,8 @@ export function symbolKeyOf(node: SheetNode): SymbolKey {
       return node.open ? 'vessel-open' : 'vessel-closed';
     case 'fitting':
       return node.fittingType;
+    case 'boundary':
+      return node.holds === 'flow' ? 'boundary-flow' : 'boundary';
     default:
       return node.kind;
   }
