@@ -23,8 +23,8 @@ export const FITTING_TYPES: ReadonlyArray<readonly [FittingType, string]> = [
 
 /** What a boundary holds. */
 export const BOUNDARY_HOLDS: ReadonlyArray<readonly ['pressure' | 'flow', string]> = [
-  ['pressure', 'A pressure (a header)'],
-  ['flow', 'A flow (a draw-off or a supply)'],
+  ['pressure', 'Pressure (header)'],
+  ['flow', 'Flow (draw-off)'],
 ];
 
 export const LOSS_METHODS: ReadonlyArray<readonly [LossMethod, string]> = [
