@@ -9,16 +9,11 @@
  * factor, which is O(n) for trees and series lines.
  */
 import { minimumDegreeOrder, type EliminationOrder } from './ordering';
+import { clearPatternCaches, PatternCache } from './patternCache';
 
 /** Patterns kept for reuse across solves (most recent last). */
 const PATTERN_CACHE_SIZE = 4;
-const patternCache: Array<{ a: Int32Array; b: Int32Array; ldl: SparseLdl }> = [];
-
-function samePattern(x: Int32Array, y: ArrayLike<number>): boolean {
-  if (x.length !== y.length) return false;
-  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return false;
-  return true;
-}
+const patternCache = new PatternCache<SparseLdl>(PATTERN_CACHE_SIZE);
 
 /**
  * A factoriser for this pattern, reusing the ordering and symbolic factorisation of an earlier
@@ -32,23 +27,15 @@ export function sparseLdlFor(
   edgeA: ArrayLike<number>,
   edgeB: ArrayLike<number>,
 ): SparseLdl {
-  for (let i = patternCache.length - 1; i >= 0; i--) {
-    const entry = patternCache[i];
-    if (entry.ldl.size === size && samePattern(entry.a, edgeA) && samePattern(entry.b, edgeB)) {
-      patternCache.splice(i, 1);
-      patternCache.push(entry);
-      return entry.ldl;
-    }
-  }
-  const ldl = new SparseLdl(size, edgeA, edgeB);
-  patternCache.push({ a: Int32Array.from(edgeA), b: Int32Array.from(edgeB), ldl });
-  if (patternCache.length > PATTERN_CACHE_SIZE) patternCache.shift();
-  return ldl;
+  return patternCache.get(size, edgeA, edgeB, () => new SparseLdl(size, edgeA, edgeB));
 }
 
-/** Forgets every kept pattern, so the next solve of any sheet orders its matrix afresh (for tests). */
+/**
+ * Forgets every kept pattern (this module's and the node-equation solvers' of linearSolver.ts),
+ * so the next solve of any sheet orders its matrix afresh (for tests).
+ */
 export function clearPatternCache(): void {
-  patternCache.length = 0;
+  clearPatternCaches();
 }
 
 /** A symmetric sparse matrix pattern (diagonal plus the given off-diagonal pairs), factorised numerically on demand. */
@@ -70,10 +57,17 @@ export class SparseLdl {
    * @param size number of unknowns
    * @param edgeA first end of each off-diagonal pair (original indices)
    * @param edgeB second end of each off-diagonal pair
+   * @param order the pattern's elimination order when already worked out (by default, its
+   *   minimum-degree order)
    */
-  constructor(size: number, edgeA: ArrayLike<number>, edgeB: ArrayLike<number>) {
+  constructor(
+    size: number,
+    edgeA: ArrayLike<number>,
+    edgeB: ArrayLike<number>,
+    order: EliminationOrder = minimumDegreeOrder(size, edgeA, edgeB),
+  ) {
     this.size = size;
-    this.order = minimumDegreeOrder(size, edgeA, edgeB);
+    this.order = order;
     const { columnStart, rows, inverse } = this.order;
     this.values = new Float64Array(rows.length);
     this.pivots = new Float64Array(size);

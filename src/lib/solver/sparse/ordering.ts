@@ -39,15 +39,43 @@ export function minimumDegreeOrder(
   edgeA: ArrayLike<number>,
   edgeB: ArrayLike<number>,
 ): EliminationOrder {
-  return forestOrder(n, edgeA, edgeB) ?? quotientGraphOrder(n, edgeA, edgeB);
+  return forestOrder(n, edgeA, edgeB) ?? quotientGraphOrder(n, edgeA, edgeB, UNBOUNDED)!;
 }
 
-/** Minimum degree on the quotient graph, for any pattern (see minimumDegreeOrder). */
+/** Limits for `boundedMinimumDegreeOrder`. */
+export interface OrderingBudget {
+  /** Most below-diagonal entries of the factor. */
+  fill: number;
+  /** Most list entries visited by the degree updates (the ordering's own work). */
+  work: number;
+}
+
+const UNBOUNDED: OrderingBudget = { fill: Infinity, work: Infinity };
+
+/**
+ * As `minimumDegreeOrder`, but gives up (null) as soon as the factor's below-diagonal entries
+ * would exceed `budget.fill` or the degree updates would visit more than `budget.work` list
+ * entries. On a forest, a series line or a ladder the work stays a small multiple of the
+ * pattern's entries; on a 2-D mesh it grows with the mesh's width (about 70 per entry at 400
+ * nodes, 2,600 at 50,000), so a work budget bounds the time spent finding out that a pattern
+ * is too costly for a direct solve.
+ */
+export function boundedMinimumDegreeOrder(
+  n: number,
+  edgeA: ArrayLike<number>,
+  edgeB: ArrayLike<number>,
+  budget: OrderingBudget,
+): EliminationOrder | null {
+  return forestOrder(n, edgeA, edgeB) ?? quotientGraphOrder(n, edgeA, edgeB, budget);
+}
+
+/** Minimum degree on the quotient graph, for any pattern (see minimumDegreeOrder); null over the budget. */
 function quotientGraphOrder(
   n: number,
   edgeA: ArrayLike<number>,
   edgeB: ArrayLike<number>,
-): EliminationOrder {
+  budget: OrderingBudget,
+): EliminationOrder | null {
   const variables = distinctNeighbours(n, edgeA, edgeB);
   const elementsOf: number[][] = Array.from({ length: n }, () => []);
   /** elementVariables[e]: the live nodes next to element e (the eliminated node e). */
@@ -67,6 +95,8 @@ function quotientGraphOrder(
   const perm = new Int32Array(n);
   const inverse = new Int32Array(n);
   const columns: number[][] = [];
+  let entries = 0;
+  let work = 0;
   let step = 0;
   while (step < n) {
     if (heap.size === 0) break;
@@ -98,6 +128,8 @@ function quotientGraphOrder(
     }
     elementVariables[v] = list;
     columns.push(list);
+    entries += list.length;
+    if (entries > budget.fill) return null;
     variables[v] = [];
     elementsOf[v] = [];
 
@@ -122,7 +154,9 @@ function quotientGraphOrder(
         mark[w] = stamp;
         d++;
       }
+      work += variables[u].length;
       for (const e of elementsOf[u]) {
+        work += elementVariables[e].length;
         for (const w of elementVariables[e]) {
           if (mark[w] === stamp) continue;
           mark[w] = stamp;
@@ -132,6 +166,7 @@ function quotientGraphOrder(
       degree[u] = d;
       heap.push(d * n + u);
     }
+    if (work > budget.work) return null;
   }
 
   const columnStart = new Int32Array(n + 1);
