@@ -22,6 +22,7 @@ const doc = network(shape, size);
 const stages = ['case+fluid', 'graph', 'parts', 'iteration', 'results', 'findings', 'solve()'];
 const times: number[][] = stages.map(() => []);
 let iterations = 0;
+let linear = '';
 for (let r = 0; r < runs + 5; r++) {
   const t: number[] = [performance.now()];
   const working = applyCase(doc, null);
@@ -40,6 +41,11 @@ for (let r = 0; r < runs + 5; r++) {
   solve(doc);
   t.push(performance.now());
   iterations = outcome.iterations;
+  const { method, cgIterations, fallbacks } = outcome.linear;
+  linear =
+    method === 'direct'
+      ? 'node equations by direct LDLᵀ'
+      : `node equations by AMG-preconditioned CG: ${cgIterations} CG steps over the iterations, ${fallbacks} direct fallbacks`;
   if (r < 5) continue; // warm-up
   for (let s = 0; s < stages.length; s++) times[s].push(t[s + 1] - t[s]);
 }
@@ -47,5 +53,6 @@ const median = (v: number[]) => [...v].sort((a, b) => a - b)[v.length >> 1];
 console.log(
   `${shape}, ${Object.keys(doc.pipes).length} pipes, ${iterations} iterations, median of ${runs} runs (ms):`,
 );
+console.log(linear);
 for (let s = 0; s < stages.length; s++)
   console.log(`${stages[s].padStart(12)}  ${median(times[s]).toFixed(3).padStart(9)}`);
