@@ -72,7 +72,9 @@ function benchNetworks(): void {
   console.log(
     'wall: elapsed time of solve(); CPU: user + system CPU time of the process over the solve ' +
       '(less disturbed when the machine is shared). first: wall time of the first (untimed) ' +
-      'solve of the sheet, which also orders the matrix; the timed repeats reuse that ordering. ' +
+      'solve of the sheet, which also decides how to solve its node equations (a direct factor ' +
+      'and its ordering, or for a big mesh multigrid-preconditioned conjugate gradients: ' +
+      'sparse/linearSolver.ts); the timed repeats reuse that. ' +
       'clone ms: median wall time of solving a fresh structured clone of the sheet each repeat, ' +
       "as the app's solver worker receives it on every edit or drag step (not counting the clone).",
   );
@@ -98,8 +100,8 @@ function benchNetworks(): void {
       const doc = network(shape, size);
       const pipes = Object.keys(doc.pipes).length;
       const repeats = REPEATS[size];
-      // The first solve of a sheet also orders its matrix; later solves of the same connections
-      // reuse that (sparse/ldl.ts), so it is timed on its own.
+      // The first solve of a sheet also works out how to solve its node equations; later solves
+      // of the same connections reuse that (sparse/linearSolver.ts), so it is timed on its own.
       const f0 = performance.now();
       if (size < 100_000) solve(doc);
       const first = size < 100_000 ? performance.now() - f0 : NaN;
