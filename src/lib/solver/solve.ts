@@ -14,7 +14,8 @@
  *   are a stiff linear resistance (laws.ts CLOSED_RESISTANCE): ≤ 1e-8 m³/s per 100 m of head.
  * - A pump in duty mode is a flow-controlled link; its result head is the EGL rise the sheet
  *   asks of it at that flow.
- * - A control valve follows IEC 60534-2-1 unchoked; flow beyond the choked limit is a finding.
+ * - A control valve follows IEC 60534-2-1; one that chokes is held at its choked flow (the flow
+ *   no longer rises with the drop; network/choke.ts), and that is a stop finding.
  */
 import type { HeadrouteDocument, Id } from '../model/types';
 import { applyCase } from './applyCase';
@@ -22,9 +23,8 @@ import { findings, findingsIn } from './findings/catalogue';
 import { sheetFindings } from './findings/sheet';
 import { solveFluid } from './fluid';
 import { buildGraph } from './network/build';
-import { gradientSolve } from './network/gga';
+import { solveWithChokedValves } from './network/choke';
 import { activeParts } from './network/topology';
-import { elementResults } from './results';
 import type { Finding, SolveResult } from './types';
 
 /**
@@ -75,8 +75,9 @@ export function solve(doc: HeadrouteDocument, caseId?: Id | null): SolveResult {
   try {
     const graph = buildGraph(working, fluid);
     const parts = activeParts(working, graph);
-    const outcome = gradientSolve(graph, parts.activeNode, parts.activeLink);
-    const { records: results, indexed } = elementResults(graph, outcome, parts.activeLink, fluid);
+    const solved = solveWithChokedValves(graph, parts.activeNode, parts.activeLink, fluid);
+    const { outcome } = solved;
+    const { records: results, indexed } = solved.results;
     const nothingFixed = parts.findings.some((f) => f.code === 'no-fixed-head');
     const result: SolveResult = {
       ...base,

@@ -98,6 +98,11 @@ export interface ControlValveResult {
   /** Pressure drop at which flow chokes (IEC 60534-2-1), Pa. */
   chokedPressureDrop: number;
   choked: boolean;
+  /**
+   * True when the valve chokes and the solve holds its flow at the choked flow (the flow shown
+   * is then the most the valve passes at its inlet pressure); absent or false otherwise.
+   */
+  flowLimited?: boolean;
 }
 
 /** Liquid and site state the solve used. */

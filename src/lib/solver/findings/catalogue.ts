@@ -140,10 +140,21 @@ export function findingsIn(system: UnitSystem) {
         `Pump ${q(name)}: NPSH available ${u.head(npsha)} against ${u.head(npshr)} required (ratio ${fixed(npsha / npshr, 2)}, margin ${u.head(npsha - npshr)}) is inside the project's rule of at least ${fixed(ruleRatio, 2)} × and ${u.head(ruleMetres)}.`,
         [id],
       ),
-    controlValveChoked: (name: string, dp: number, dpChoked: number, id: Id) =>
+    /** `limitedFlow`: the choked flow the solve holds the valve at, m³/s; null when it could not. */
+    controlValveChoked: (
+      name: string,
+      dp: number,
+      dpChoked: number,
+      limitedFlow: number | null,
+      id: Id,
+    ) =>
       finding(
         'control-valve-choked',
-        `Control valve ${q(name)}: pressure drop ${u.pressureDrop(dp)} exceeds the choked-flow limit ${u.pressureDrop(dpChoked)} (IEC 60534-2-1); the flow cannot rise with more drop and the valve will cavitate or flash. The flow shown assumes no choking and is too high.`,
+        `Control valve ${q(name)}: pressure drop ${u.pressureDrop(dp)} exceeds the choked-flow limit ${u.pressureDrop(dpChoked)} (IEC 60534-2-1); the flow cannot rise with more drop and the valve will cavitate or flash. ${
+          limitedFlow === null
+            ? 'The flow shown assumes no choking and is too high.'
+            : `The flow is held at the choked flow, ${u.flow(limitedFlow)}; what leaves the valve is not a single liquid phase, so the figures downstream of it are indicative.`
+        }`,
         [id],
       ),
     aboveDesignPressure: (

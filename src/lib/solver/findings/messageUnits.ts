@@ -28,6 +28,8 @@ export interface MessageUnits {
   chainage(m: number): string;
   /** A span of chainage, m → "10.0–24.5 m" / "32.8–80.4 ft". */
   chainageSpan(start: number, end: number): string;
+  /** A volume flow, m³/s → "29.4 m³/h" / "129.6 gpm". */
+  flow(q: number): string;
   /** A velocity, m/s → "2.31 m/s" / "7.58 ft/s". */
   velocity(ms: number): string;
   /** A temperature, K → "95.0 °C" / "203.0 °F". */
@@ -56,12 +58,14 @@ const SI: MessageUnits = {
   chainage: (m) => `${fixed(m, 1)} m`,
   chainageSpan: (a, b) => `${fixed(a, 1)}–${fixed(b, 1)} m`,
   velocity: (ms) => `${fixed(ms, 2)} m/s`,
+  flow: (q) => `${fixed(q * 3600, 1)} m³/h`,
   temperature: (k) => `${fixed(k - 273.15, 1)} °C`,
 };
 
 const psi = inUnit('psi');
 const ft = inUnit('ft');
 const fps = inUnit('ft/s');
+const gpm = inUnit('gpm');
 
 const US: MessageUnits = {
   pressureAbs: (pa) => `${fixed(psi(pa), 2)} psia`,
@@ -74,6 +78,7 @@ const US: MessageUnits = {
   chainage: (m) => `${fixed(ft(m), 1)} ft`,
   chainageSpan: (a, b) => `${fixed(ft(a), 1)}–${fixed(ft(b), 1)} ft`,
   velocity: (ms) => `${fixed(fps(ms), 2)} ft/s`,
+  flow: (q) => `${fixed(gpm(q), 1)} gpm`,
   temperature: (k) => `${fixed(toDisplay(k, 'temperature', 'US'), 1)} °F`,
 };
 

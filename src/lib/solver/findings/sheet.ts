@@ -117,7 +117,13 @@ export function sheetFindings(
   for (const [id, cv] of Object.entries(results.controlValves)) {
     if (cv.choked)
       out.push(
-        findings.controlValveChoked(doc.nodes[id].name, cv.pressureDrop, cv.chokedPressureDrop, id),
+        findings.controlValveChoked(
+          doc.nodes[id].name,
+          cv.pressureDrop,
+          cv.chokedPressureDrop,
+          cv.flowLimited === true ? Math.abs(cv.flow) : null,
+          id,
+        ),
       );
   }
   for (let i = 0; i < graph.sheetNodes.length; i++) {

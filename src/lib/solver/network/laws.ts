@@ -118,7 +118,7 @@ export class LocalLossLaw implements LinkLaw {
 /**
  * A control valve by IEC 60534-2-1 eq. (1) (turbulent, not choked): Δp = (ρ/ρ0)(Q/Kv)² bar,
  * i.e. a quadratic law h = c·Q|Q| with c = Δp(1 m³/s)/(ρg). Choking is checked afterwards
- * and reported as a finding.
+ * (choke.ts), which then holds the valve at its choked flow with `ChokedValveLaw`.
  */
 export class QuadraticLaw implements LinkLaw {
   readonly initialFlow: number;
@@ -135,6 +135,44 @@ export class QuadraticLaw implements LinkLaw {
   }
   slope(flow: number): number {
     return 2 * this.coefficient * Math.abs(flow);
+  }
+}
+
+/**
+ * A control valve whose flow is held near a cap (IEC 60534-2-1: once the pressure drop passes
+ * FL²(p1 − FF·pv) the flow no longer rises with it): the quadratic law up to |Q| = cap, then a
+ * straight line of slope `steep`. choke.ts sets `steep` well above the quadratic's slope at any
+ * flow it will meet (so the law falls as the cap rises, and the flow stays near the cap) but
+ * below the stiff-branch slope where it can (so the iteration checks it in head, not only in
+ * flow), and moves the cap until the flow that actually passes is the choked flow: the
+ * steepness does not enter the answer. Continuous and monotone.
+ */
+export class ChokedValveLaw implements LinkLaw {
+  readonly initialFlow: number;
+  /**
+   * @param coefficient c in h = c·Q|Q| below the cap, s²/m⁵
+   * @param cap the choked flow, m³/s (≥ 0), in either direction
+   * @param steep slope of the law beyond the cap, s/m²
+   */
+  constructor(
+    readonly coefficient: number,
+    readonly cap: number,
+    /** Slope beyond the cap, s/m². */
+    readonly steep: number,
+    initialFlow: number,
+  ) {
+    this.initialFlow = Math.min(initialFlow, cap);
+  }
+  refresh(): void {}
+  headLoss(flow: number): number {
+    const q = Math.abs(flow);
+    if (q <= this.cap) return this.coefficient * flow * q;
+    const atCap = this.coefficient * this.cap * this.cap;
+    return Math.sign(flow) * (atCap + this.steep * (q - this.cap));
+  }
+  slope(flow: number): number {
+    const q = Math.abs(flow);
+    return q <= this.cap ? 2 * this.coefficient * q : this.steep;
   }
 }
 
