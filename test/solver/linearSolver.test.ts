@@ -131,6 +131,26 @@ describe('iterative node solves on a looped grid agree with the direct factor', 
     expect(flowGap).toBeLessThan(1e-9); // m³/s (seen: 3e-11)
   });
 
+  it('when conjugate gradients stop short, the direct factor answers instead (fallback)', () => {
+    const sheet = gridSheet(30);
+    const direct = gradientOutcome(sheet, 'direct');
+    const working = applyCase(sheet.doc, null);
+    const graph = buildGraph(working, solveFluid(working.settings));
+    const parts = activeParts(working, graph);
+    // One CG step can never reach 1e-12 m³/s from a cold start: every solve falls back.
+    const starved = gradientSolve(graph, parts.activeNode, parts.activeLink, {
+      method: 'iterative',
+      cgMaxIterations: 1,
+    });
+    expect(starved.linear.fallbacks).toBeGreaterThan(0);
+    expect(starved.converged).toBe(true);
+    expect(starved.massImbalance).toBeLessThan(1e-11);
+    let gap = 0;
+    for (let i = 0; i < direct.heads.length; i++)
+      gap = Math.max(gap, Math.abs(direct.heads[i] - starved.heads[i]));
+    expect(gap).toBeLessThan(1e-9);
+  });
+
   it('solve() on a 56 × 56 grid goes iterative and keeps mass and energy balances (issue: 1e-9 m³/s, 1e-6 m)', () => {
     const sheet = gridSheet(56); // 3,136 junctions: over the size floor, ordering over the budget
     const pattern = gridPattern(56);

@@ -55,6 +55,8 @@ export type LinearMethod = 'direct' | 'iterative';
 /** `method`: 'auto' applies the rule above; 'direct' or 'iterative' force one (for tests and benchmarks). */
 export interface NodeSolverOptions {
   method?: 'auto' | LinearMethod;
+  /** Conjugate-gradient steps before the direct fallback (default CG_MAX_ITERATIONS; for tests). */
+  cgMaxIterations?: number;
 }
 
 /** Counters of the solves made with one solver (for benchmarks). */
@@ -101,7 +103,8 @@ export function nodeSolverFor(
 ): NodeSolver {
   const method = options.method ?? 'auto';
   if (method === 'direct') return new DirectSolver(new SparseLdl(size, edgeA, edgeB));
-  if (method === 'iterative') return new IterativeSolver(size, edgeA, edgeB);
+  if (method === 'iterative')
+    return new IterativeSolver(size, edgeA, edgeB, options.cgMaxIterations ?? CG_MAX_ITERATIONS);
   return solvers.get(size, edgeA, edgeB, () => chooseSolver(size, edgeA, edgeB));
 }
 
@@ -113,7 +116,7 @@ function chooseSolver(size: number, edgeA: ArrayLike<number>, edgeB: ArrayLike<n
     work: WORK_RATIO * entries,
   });
   if (order !== null) return new DirectSolver(new SparseLdl(size, edgeA, edgeB, order));
-  return new IterativeSolver(size, edgeA, edgeB);
+  return new IterativeSolver(size, edgeA, edgeB, CG_MAX_ITERATIONS);
 }
 
 class DirectSolver implements NodeSolver {
@@ -145,8 +148,15 @@ class IterativeSolver implements NodeSolver {
   private readonly edgeA: Int32Array;
   private readonly edgeB: Int32Array;
   private direct: SparseLdl | null = null;
+  private readonly maxIterations: number;
 
-  constructor(size: number, edgeA: ArrayLike<number>, edgeB: ArrayLike<number>) {
+  constructor(
+    size: number,
+    edgeA: ArrayLike<number>,
+    edgeB: ArrayLike<number>,
+    maxIterations: number,
+  ) {
+    this.maxIterations = maxIterations;
     this.pattern = new EdgePattern(size, edgeA, edgeB);
     this.matrix = this.pattern.matrix();
     this.work = new PcgWork(size);
@@ -174,7 +184,7 @@ class IterativeSolver implements NodeSolver {
         {
           absoluteTolerance: CG_ABSOLUTE_TOLERANCE,
           roundingFactor: CG_ROUNDING_FACTOR,
-          maxIterations: CG_MAX_ITERATIONS,
+          maxIterations: this.maxIterations,
           relativeTolerance,
         },
         this.work,
