@@ -159,31 +159,38 @@ describe('pairwise aggregation (sparse/aggregation.ts, Notay 2010)', () => {
 });
 
 describe('AMG-preconditioned conjugate gradients (sparse/amg.ts, sparse/pcg.ts)', () => {
-  it('solves a 60 × 60 weighted grid to 1e-12 absolute and agrees with LDLᵀ', () => {
-    const s = weightedGrid(60);
-    const m = assembled(s);
-    const rhs = Float64Array.from({ length: s.n }, (_, i) => 0.01 * Math.sin(i / 13));
-    rhs[0] += 5 * 40; // inflow from a 40 m fixed head through the corner link
-    const amg = new AggregationAmg();
-    expect(amg.setup(m)).toBe(true);
-    expect(amg.levelCount).toBeGreaterThanOrEqual(3); // 3,600 → … → ≤ 400 unknowns
-    const x = new Float64Array(s.n);
-    const out = pcg(m, rhs, x, (r, z) => amg.apply(r, z), {
-      absoluteTolerance: 1e-12,
-      roundingFactor: 4,
-      maxIterations: 200,
-    });
-    expect(out.converged).toBe(true);
-    expect(out.residual).toBeLessThanOrEqual(1e-12);
-    // The residual is recomputed here from scratch.
-    const back = new Float64Array(s.n);
-    multiplyInto(m, x, back);
-    expect(maxAbs(back.map((v, i) => v - rhs[i]))).toBeLessThan(1e-12);
-    const ldl = new SparseLdl(s.n, s.a, s.b);
-    expect(ldl.factor(s.diag, s.off)).toBe(true);
-    const reference = ldl.solve(rhs);
-    expect(maxAbs(x.map((v, i) => v - reference[i]))).toBeLessThan(1e-9);
-  });
+  it.each([
+    ['V-cycle, plain CG', 1, false],
+    ['K-cycle, flexible CG', 'krylov', true],
+  ] as const)(
+    '%s: solves a 60 × 60 weighted grid to 1e-12 absolute and agrees with LDLᵀ',
+    (_, cycle, flexible) => {
+      const s = weightedGrid(60);
+      const m = assembled(s);
+      const rhs = Float64Array.from({ length: s.n }, (_, i) => 0.01 * Math.sin(i / 13));
+      rhs[0] += 5 * 40; // inflow from a 40 m fixed head through the corner link
+      const amg = new AggregationAmg(cycle);
+      expect(amg.setup(m)).toBe(true);
+      expect(amg.levelCount).toBeGreaterThanOrEqual(3); // 3,600 → … → ≤ 100 unknowns
+      const x = new Float64Array(s.n);
+      const out = pcg(m, rhs, x, (r, z) => amg.apply(r, z), {
+        absoluteTolerance: 1e-12,
+        roundingFactor: 4,
+        maxIterations: 200,
+        flexible,
+      });
+      expect(out.converged).toBe(true);
+      expect(out.residual).toBeLessThanOrEqual(1e-12);
+      // The residual is recomputed here from scratch.
+      const back = new Float64Array(s.n);
+      multiplyInto(m, x, back);
+      expect(maxAbs(back.map((v, i) => v - rhs[i]))).toBeLessThan(1e-12);
+      const ldl = new SparseLdl(s.n, s.a, s.b);
+      expect(ldl.factor(s.diag, s.off)).toBe(true);
+      const reference = ldl.solve(rhs);
+      expect(maxAbs(x.map((v, i) => v - reference[i]))).toBeLessThan(1e-9);
+    },
+  );
 
   it('the V- and W-cycle preconditioners are symmetric: uᵀ B v = vᵀ B u', () => {
     const m = assembled(weightedGrid(30));

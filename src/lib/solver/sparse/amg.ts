@@ -4,10 +4,10 @@
  * a symmetric M-matrix). Method: Notay, 2010, "An aggregation-based algebraic multigrid
  * method", Electronic Transactions on Numerical Analysis 37, pp. 123–146 — double pairwise
  * aggregation (aggregation.ts), piecewise-constant prolongation, Galerkin coarse operators
- * (symmetric.ts) — used here in a symmetric multigrid cycle (forward Gauss–Seidel before the
- * coarse correction, backward after, so the preconditioner is symmetric positive definite as
- * conjugate gradients needs; Briggs, Henson and McCormick, 2000, "A Multigrid Tutorial", 2nd
- * ed., ch. 3 and 8) with a direct LDLᵀ (ldl.ts) on the coarsest level.
+ * (symmetric.ts) — with forward Gauss–Seidel before the coarse correction and backward after
+ * (a V- or W-cycle is then a symmetric positive-definite operator, as plain conjugate gradients
+ * need; Briggs, Henson and McCormick, 2000, "A Multigrid Tutorial", 2nd ed., ch. 3 and 8), or
+ * the paper's K-cycle (see CycleIndex), and a direct LDLᵀ (ldl.ts) on the coarsest level.
  *
  * The hierarchy is rebuilt from the matrix on every `setup` (aggregates follow the current link
  * weights; the cost is a few passes over the entries), so nothing but the coarsest level's
@@ -15,7 +15,7 @@
  */
 import { doublePairwiseAggregates } from './aggregation';
 import { SparseLdl } from './ldl';
-import { residualInto, type SymmetricMatrix } from './symmetric';
+import { multiplyInto, residualInto, type SymmetricMatrix } from './symmetric';
 
 /**
  * Levels with at most this many unknowns are solved directly. Small, because the coarsest
@@ -38,6 +38,9 @@ interface Level {
   coarseX: Float64Array;
   coarseR: Float64Array;
   coarseE: Float64Array;
+  /** Products A_c v of the Krylov cycle's two coarse directions. */
+  coarseW1: Float64Array;
+  coarseW2: Float64Array;
 }
 
 /** The coarsest level's direct solver, reused while its pattern stays the same. */
@@ -49,8 +52,17 @@ interface Coarsest {
   ldl: SparseLdl;
 }
 
-/** Multigrid cycles: 1 = V-cycle, 2 = W-cycle (two coarse corrections on each level). */
-export type CycleIndex = 1 | 2;
+/**
+ * Multigrid cycles: 1 = V-cycle, 2 = W-cycle (two coarse corrections on each level), 'krylov' =
+ * K-cycle (Notay and Vassilevski, 2008, "Recursive Krylov-based multigrid cycles", Numer. Linear
+ * Algebra Appl. 15; as in Notay 2010, Algorithm 3.2): each coarse system is solved by up to two
+ * steps of flexible conjugate gradients preconditioned by the next level's cycle; the second
+ * step is skipped when the first already cut the coarse residual to KRYLOV_THRESHOLD of itself.
+ * The K-cycle is not a fixed linear operator: the outer iteration must be flexible (pcg.ts).
+ */
+export type CycleIndex = 1 | 2 | 'krylov';
+/** Residual fraction below which the K-cycle takes one step only (0.25, from memory). */
+export const KRYLOV_THRESHOLD = 0.25;
 
 /** An aggregation AMG preconditioner: `setup(A)`, then `apply(b, x)` sets x ≈ A⁻¹ b. */
 export class AggregationAmg {
@@ -94,6 +106,8 @@ export class AggregationAmg {
         coarseX: new Float64Array(m),
         coarseR: new Float64Array(m),
         coarseE: new Float64Array(m),
+        coarseW1: new Float64Array(m),
+        coarseW2: new Float64Array(m),
       });
       current = coarse;
     }
@@ -146,7 +160,8 @@ export class AggregationAmg {
     residualInto(a, b, x, r);
     coarseB.fill(0);
     for (let i = 0; i < a.n; i++) if (aggregate[i] >= 0) coarseB[aggregate[i]] += r[i];
-    this.cycle(l + 1, coarseB, coarseX);
+    if (this.cycleIndex === 'krylov' && l + 1 < this.levels.length) this.krylov(level, l + 1);
+    else this.cycle(l + 1, coarseB, coarseX);
     if (this.cycleIndex === 2 && l + 1 < this.levels.length) {
       // Second coarse correction (W-cycle): the same cycle on the coarse residual.
       const coarse = this.levels[l + 1].a;
@@ -157,6 +172,49 @@ export class AggregationAmg {
     for (let i = 0; i < a.n; i++) if (aggregate[i] >= 0) x[i] += coarseX[aggregate[i]];
     for (let s = 0; s < this.sweeps; s++) backwardGaussSeidel(a, b, x);
   }
+
+  /** The K-cycle's coarse solve: level.coarseX ≈ A_c⁻¹ level.coarseB by ≤ 2 flexible CG steps. */
+  private krylov(level: Level, next: number): void {
+    const ac = this.levels[next].a;
+    const n = ac.n;
+    const { coarseB: rc, coarseX: x, coarseR: rt, coarseE: v2, coarseW1: w1, coarseW2: w2 } = level;
+    this.cycle(next, rc, x); // v1
+    multiplyInto(ac, x, w1);
+    const rho1 = dot(x, w1, n);
+    const alpha1 = dot(x, rc, n);
+    if (!(rho1 > 0)) return; // keep the plain correction
+    const c1 = alpha1 / rho1;
+    let rcNorm = 0;
+    let rtNorm = 0;
+    for (let i = 0; i < n; i++) {
+      rt[i] = rc[i] - c1 * w1[i];
+      rcNorm += rc[i] * rc[i];
+      rtNorm += rt[i] * rt[i];
+    }
+    if (rtNorm <= KRYLOV_THRESHOLD * KRYLOV_THRESHOLD * rcNorm) {
+      for (let i = 0; i < n; i++) x[i] *= c1;
+      return;
+    }
+    this.cycle(next, rt, v2);
+    multiplyInto(ac, v2, w2);
+    const gamma = dot(v2, w1, n);
+    const beta = dot(v2, w2, n);
+    const alpha2 = dot(v2, rt, n);
+    const rho2 = beta - (gamma * gamma) / rho1;
+    if (!(rho2 > 0)) {
+      for (let i = 0; i < n; i++) x[i] *= c1;
+      return;
+    }
+    const a1 = c1 - (gamma * alpha2) / (rho1 * rho2);
+    const a2 = alpha2 / rho2;
+    for (let i = 0; i < n; i++) x[i] = a1 * x[i] + a2 * v2[i];
+  }
+}
+
+function dot(x: Float64Array, y: Float64Array, n: number): number {
+  let s = 0;
+  for (let i = 0; i < n; i++) s += x[i] * y[i];
+  return s;
 }
 
 /** One Gauss–Seidel sweep in index order. */

@@ -67,6 +67,11 @@ export function pcg(
     maxIterations: number;
     /** Also stop once the residual is this fraction of the starting one (0: never). */
     relativeTolerance?: number;
+    /**
+     * Flexible CG with one kept direction (Notay, 2000, "Flexible conjugate gradients", SIAM J.
+     * Sci. Comput. 22(4)): for a preconditioner that is not a fixed linear operator (K-cycle).
+     */
+    flexible?: boolean;
   },
   work: PcgWork = new PcgWork(a.n),
 ): PcgOutcome {
@@ -90,7 +95,7 @@ export function pcg(
     multiplyInto(a, p, q);
     const pq = dot(p, q, n);
     if (!(pq > 0) || !(rz > 0)) return { converged: false, iterations: k, residual, tolerance };
-    const alpha = rz / pq;
+    const alpha = options.flexible ? dot(p, r, n) / pq : rz / pq;
     let updated = 0;
     for (let i = 0; i < n; i++) {
       x[i] += alpha * p[i];
@@ -104,9 +109,14 @@ export function pcg(
       if (residual <= tolerance) return { converged: true, iterations: k, residual, tolerance };
     }
     precondition(r, z);
-    const rzNext = dot(r, z, n);
-    const beta = rzNext / rz;
-    rz = rzNext;
+    let beta: number;
+    if (options.flexible)
+      beta = -dot(z, q, n) / pq; // A-orthogonal to the last direction
+    else {
+      const rzNext = dot(r, z, n);
+      beta = rzNext / rz;
+      rz = rzNext;
+    }
     for (let i = 0; i < n; i++) p[i] = z[i] + beta * p[i];
   }
   residual = residualInto(a, b, x, r);
