@@ -1,7 +1,8 @@
 /**
  * Sparse LDLᵀ factorisation of a symmetric positive-definite matrix with a fixed sparsity
- * pattern, for the node equations of the global gradient method. The pattern and its
- * minimum-degree ordering are worked out once; each iteration only refactors the numbers.
+ * pattern, for the node equations of the global gradient method (chosen, or not, by
+ * linearSolver.ts) and the coarsest level of the multigrid preconditioner (amg.ts). The pattern
+ * and its minimum-degree ordering are worked out once; each iteration only refactors the numbers.
  *
  * Numeric factorisation: left-looking column LDLᵀ (George and Liu, 1981, "Computer Solution of
  * Large Sparse Positive Definite Systems", ch. 2 and 5): column j gathers the updates of every
