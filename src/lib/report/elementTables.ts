@@ -163,7 +163,7 @@ export function controlValvesTable(
       num(fmt.q(r?.flow, 'volumeFlow')),
       num(fmt.q(r?.pressureDrop, 'pressureDrop')),
       num(fmt.q(r?.chokedPressureDrop, 'pressureDrop')),
-      r ? (r.choked ? 'CHOKED' : 'no') : 'not solved',
+      r ? (r.choked ? (r.flowLimited ? 'CHOKED, flow held' : 'CHOKED') : 'no') : 'not solved',
     ]);
   }
   return tableHtml(

@@ -58,10 +58,10 @@ export function methodsHtml(doc: HeadrouteDocument): string {
     .filter((m) => m !== undefined);
 
   const items: string[] = [
-    'Network: the global gradient method (Todini and Pilati, 1988) over the whole sheet; vessels and boundaries as fixed heads; no reverse flow through pumps and check valves.',
+    'Network: the global gradient method (Todini and Pilati, 1988) over the whole sheet; vessels and pressure boundaries as fixed heads, flow boundaries as known withdrawals; no reverse flow through pumps and check valves.',
     'Pipe friction: Darcy–Weisbach; Colebrook–White for turbulent flow; 64/Re for laminar flow; a linear bridge across 2000 < Re < 4000, flagged as uncertain.',
     'Fittings: fixed K as typed; the 2-K method (Hooper, 1981); the 3-K method (Darby, 2001); entrance and exit losses at vessel nozzles; reducers, expanders and restriction orifices from their geometry.',
-    'Control valves: liquid sizing equations of IEC 60534-2-1 (Kv or Cv, inherent characteristic, choked flow from FL and FF).',
+    'Control valves: liquid sizing equations of IEC 60534-2-1 (Kv or Cv, inherent characteristic, choked flow from FL and FF); a valve that chokes is held at its choked flow at the inlet pressure it leaves, and the figures downstream of it are indicative.',
     'Pumps: head, NPSHr and efficiency curves fitted through the given points; other speeds by the affinity laws (Q ∝ N, H ∝ N², NPSHr ∝ N²).',
     'Atmospheric pressure: the ISA standard atmosphere (ISO 2533:1975) at the site elevation, unless a pressure is typed.',
     `NPSH: NPSHa at the suction flange = (p_abs − p_v)/ρg + v²/2g. Rule: NPSHa ≥ ${rule.ratio} × NPSHr and NPSHa − NPSHr ≥ ${metres}. ${

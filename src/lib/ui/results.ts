@@ -118,7 +118,7 @@ export function readoutLines(
   const cv = result?.controlValves[id];
   if (cv) {
     lines.push(['Δp', f(cv.pressureDrop, 'pressureDrop')]);
-    if (cv.choked) lines.push(['Flow', 'choked']);
+    if (cv.choked) lines.push(['Choked', cv.flowLimited ? 'flow held at the limit' : 'yes']);
   }
   return lines;
 }
