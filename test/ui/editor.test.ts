@@ -50,4 +50,40 @@ describe('editor live results', () => {
     expect(editor.result).not.toBe(edited);
     expect(editor.tagged!.doc).toBe(editor.doc);
   });
+
+  it('dims the results once per drag: from the first move that waits for a solve to the end of the drag', async () => {
+    editor.load(network('series', 6));
+    await settle();
+    const id = Object.values(editor.doc.nodes).find((n) => n.kind === 'waypoint')!.id;
+    // Outside a drag, dimmed follows the solve.
+    editor.dispatch(updateNode(id, { z: 3 }));
+    expect(editor.dimmed).toBe(true);
+    await settle();
+    expect(editor.dimmed).toBe(false);
+
+    editor.beginGesture();
+    editor.dispatch(updateNode(id, { z: 4 }));
+    expect(editor.dimmed).toBe(true);
+    await settle();
+    // Solved, but the drag goes on: still dimmed, so the sheet is not restyled at every move.
+    expect(editor.solving).toBe(false);
+    expect(editor.dimmed).toBe(true);
+    editor.dispatch(updateNode(id, { z: 5 }));
+    await settle();
+    expect(editor.dimmed).toBe(true);
+    editor.endGesture();
+    await settle();
+    expect(editor.solving).toBe(false);
+    expect(editor.dimmed).toBe(false);
+
+    // A cancelled drag ends the dimming too.
+    editor.beginGesture();
+    editor.dispatch(updateNode(id, { z: 6 }));
+    await settle();
+    expect(editor.dimmed).toBe(true);
+    editor.cancelGesture();
+    await settle();
+    expect(editor.dimmed).toBe(false);
+    expect(editor.doc.nodes[id].z).toBe(5);
+  });
 });

@@ -72,6 +72,15 @@ class Editor {
   /** The document `lastResult` was solved for (the current one once it has been solved). */
   readonly solvedDoc = $derived(this.tagged?.doc ?? null);
   readonly solving = $derived(this.tagged === null || this.tagged.revision !== this.revision);
+  /** A gesture is open and one of its changes had to wait for its result. */
+  #lagInGesture = $state(false);
+  /**
+   * Results are drawn dimmed: while they are older than the document and, once that has
+   * happened during a drag, until the drag ends. So a drag on a large sheet (solved in the
+   * background) dims the results once, rather than on and off with every move: each switch
+   * restyles and repaints every result text of the sheet.
+   */
+  readonly dimmed = $derived(this.solving || this.#lagInGesture);
   readonly dirty = $derived(this.revision !== this.savedRevision);
 
   /**
@@ -176,6 +185,7 @@ class Editor {
     this.revision = h.revision;
     this.canUndo = h.canUndo;
     this.canRedo = h.canRedo;
+    if (!h.inGesture) this.#lagInGesture = false;
     if (!this.#carryResult(before, beforeRevision)) this.#requestSolve();
   }
 
@@ -208,6 +218,7 @@ class Editor {
     );
     this.#requested.set(this.revision, this.doc);
     this.#runner.request(this.doc, this.revision, this.caseId);
+    if (this.#history.inGesture && this.solving) this.#lagInGesture = true;
   }
 
   /** Solve again (e.g. after the case changes). */
