@@ -17,10 +17,20 @@
  * BENCH_HIDE=<css selector> hides that part of the page during the run (what does it cost?).
  * BENCH_TRACE=1 records a Chromium trace of each drag and prints main-thread time per move by
  * kind of work (script, style, layout, paint, commit) and raster time (bench/traceSummary.ts).
+ * BENCH_SAVE=<folder> also writes each drag's trace (.json) and CPU profile (.cpuprofile) there,
+ * for a closer look in Chromium's DevTools.
  */
 import { chromium, type CDPSession, type Page } from '@playwright/test';
 import { spawn, spawnSync } from 'node:child_process';
-import { cpSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
+import {
+  cpSync,
+  mkdirSync,
+  mkdtempSync,
+  readFileSync,
+  rmSync,
+  statSync,
+  writeFileSync,
+} from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import { tmpdir } from 'node:os';
 import { extname, join, normalize } from 'node:path';
@@ -35,6 +45,7 @@ const MOVES = Number(process.env.BENCH_MOVES ?? 40);
 const DEV = Boolean(process.env.BENCH_DEV);
 const PROFILE = Boolean(process.env.BENCH_PROFILE);
 const TRACE = Boolean(process.env.BENCH_TRACE);
+const SAVE = process.env.BENCH_SAVE;
 
 const TYPES: Record<string, string> = {
   '.html': 'text/html',
@@ -341,6 +352,12 @@ async function measure(page: Page, label: string, cdp: CDPSession | null, kind: 
   console.log(
     `${label.padEnd(62)} ${String(elements).padStart(5)}  ${f(quantile(sheet, 0.5))} ${f(quantile(sheet, 0.95))}   ${f(quantile(solved, 0.5))} ${f(quantile(solved, 0.95))}   ${f(quantile(work, 0.5))} ${f(quantile(work, 0.95))}   ${f(quantile(frames, 0.5))} ${f(quantile(frames, 0.95))}`,
   );
+  if (SAVE) {
+    mkdirSync(SAVE, { recursive: true });
+    const name = join(SAVE, label.replace(/[^A-Za-z0-9]+/g, '-').toLowerCase());
+    if (trace) writeFileSync(`${name}.json`, trace);
+    if (profile) writeFileSync(`${name}.cpuprofile`, JSON.stringify(profile));
+  }
   if (trace) {
     console.log('  main thread and raster per move (Chromium trace):');
     console.log(traceLines(trace, MOVES).join('\n'));
