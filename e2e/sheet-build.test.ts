@@ -184,6 +184,8 @@ test('a boundary switched to hold a flow draws that flow from the tank, and undo
   // Switching alone keeps the flow it passed, so nothing on the sheet changes yet.
   const outflow = details.getByLabel('Outflow');
   await expect(outflow).toBeVisible();
+  await expect(outflow).toHaveValue(/^-/); // it supplied the tank
+  await expect.poll(async () => number(await flowText.textContent())).toBe(headerFlow);
   await type(outflow, '12 m3/h');
   await expect.poll(async () => number(await flowText.textContent())).toBeCloseTo(12, 6);
   await expect(page.locator(`g.node[data-node-id="${drawOff}"] path.arrow`)).toHaveCount(1);

@@ -142,3 +142,35 @@ export function expectConservation(doc: HeadrouteDocument, result: SolveResult):
     expect(Math.abs(drop - r.frictionLoss), `EGL along ${id}`).toBeLessThan(1e-6);
   }
 }
+
+/** A k × k grid of 50 m DN150 pipes fed from a 40 m tank at one corner, drawn off along the far edge. */
+export function gridSheet(k: number): Sheet {
+  const s = new Sheet();
+  const id = (i: number, j: number) => `J${i}_${j}`;
+  for (let i = 0; i < k; i++)
+    for (let j = 0; j < k; j++) s.node('junction', id(i, j), { z: 0.01 * ((i * 7 + j * 3) % 11) });
+  let n = 0;
+  for (let i = 0; i < k; i++)
+    for (let j = 0; j < k; j++) {
+      if (i + 1 < k)
+        s.pipe(`P${++n}`, at(id(i, j), 'hub'), at(id(i + 1, j), 'hub'), {
+          length: 50,
+          diameter: 0.15,
+        });
+      if (j + 1 < k)
+        s.pipe(`P${++n}`, at(id(i, j), 'hub'), at(id(i, j + 1), 'hub'), {
+          length: 50,
+          diameter: 0.15,
+        });
+    }
+  s.vessel('S', 40);
+  s.pipe('feed', at('S', 'N1'), at(id(0, 0), 'hub'), { length: 10, diameter: 0.3 });
+  for (let m = 0; m < Math.floor(k / 4); m++) {
+    s.boundary(`B${m}`, 0, 101_325);
+    s.pipe(`out${m}`, at(id(k - 1, 4 * m + 2), 'hub'), at(`B${m}`, 'p'), {
+      length: 10,
+      diameter: 0.1,
+    });
+  }
+  return s;
+}

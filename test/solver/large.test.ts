@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { solve } from '../../src/lib/solver/solve';
-import { at, expectAllFinite, expectConservation, Sheet } from './helpers';
+import { at, expectAllFinite, expectConservation, gridSheet, Sheet } from './helpers';
 
 const g = 9.80665; // standard gravity, CGPM 1901
 
@@ -35,38 +35,6 @@ function seriesLine(): Sheet {
     prev = at(`W${i}`, 'out');
   }
   s.pipe(`L${N}`, prev, at('T', 'N1'), { length: LENGTH, diameter: D, roughness: EPS });
-  return s;
-}
-
-/** A k × k grid of junctions, 50 m DN150 pipes, fed from a tank at one corner, drawn off at the far edge. */
-function gridSheet(k: number): Sheet {
-  const s = new Sheet();
-  const id = (i: number, j: number) => `J${i}_${j}`;
-  for (let i = 0; i < k; i++)
-    for (let j = 0; j < k; j++) s.node('junction', id(i, j), { z: 0.01 * ((i * 7 + j * 3) % 11) });
-  let n = 0;
-  for (let i = 0; i < k; i++)
-    for (let j = 0; j < k; j++) {
-      if (i + 1 < k)
-        s.pipe(`P${++n}`, at(id(i, j), 'hub'), at(id(i + 1, j), 'hub'), {
-          length: 50,
-          diameter: 0.15,
-        });
-      if (j + 1 < k)
-        s.pipe(`P${++n}`, at(id(i, j), 'hub'), at(id(i, j + 1), 'hub'), {
-          length: 50,
-          diameter: 0.15,
-        });
-    }
-  s.vessel('S', 40);
-  s.pipe('feed', at('S', 'N1'), at(id(0, 0), 'hub'), { length: 10, diameter: 0.3 });
-  for (let m = 0; m < 5; m++) {
-    s.boundary(`B${m}`, 0, 101_325);
-    s.pipe(`out${m}`, at(id(k - 1, 4 * m + 2), 'hub'), at(`B${m}`, 'p'), {
-      length: 10,
-      diameter: 0.1,
-    });
-  }
   return s;
 }
 

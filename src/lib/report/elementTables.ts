@@ -5,6 +5,7 @@
  */
 import type { HeadrouteDocument, Id, Pipe, SheetNode } from '../model/types';
 import { PIPE_MATERIALS } from '../physics/materials';
+import { netPipeOutflow } from '../solver/nodeFlows';
 import type { SolveResult } from '../solver/types';
 import { formatQuantity, NOT_A_VALUE, type Quantity, type UnitSystem } from '../units';
 import { tableHtml, type Cell } from './html';
@@ -242,7 +243,7 @@ export function vesselsTable(doc: HeadrouteDocument, result: SolveResult, fmt: F
       n.kind === 'vessel' ? 'vessel' : 'boundary',
       vesselInputs(n, fmt),
       portText || NOT_A_VALUE,
-      num(fmt.q(netOutflow(doc, result, n.id), 'volumeFlow')),
+      num(fmt.q(netPipeOutflow(doc, result, n.id), 'volumeFlow')),
     ]);
   }
   return tableHtml(
@@ -250,23 +251,4 @@ export function vesselsTable(doc: HeadrouteDocument, result: SolveResult, fmt: F
     ['Element', 'Kind', 'Inputs', 'At the ports', 'Net outflow'],
     rows,
   );
-}
-
-/** Flow leaving a node through its pipes, m³/s (negative when it fills). */
-function netOutflow(doc: HeadrouteDocument, result: SolveResult, id: Id): number | null {
-  let sum = 0;
-  let any = false;
-  for (const pipe of Object.values(doc.pipes)) {
-    const r = result.pipes[pipe.id];
-    if (!r) continue;
-    if (pipe.from.node === id) {
-      sum += r.flow;
-      any = true;
-    }
-    if (pipe.to.node === id) {
-      sum -= r.flow;
-      any = true;
-    }
-  }
-  return any ? sum : null;
 }
