@@ -97,4 +97,19 @@ describe('sheet items', () => {
     const node = nudged.nodes.items.find((n) => n.node.id === waypoint.id)!;
     expect(node).not.toBe(longer.nodes.items.find((n) => n.node.id === waypoint.id));
   });
+
+  it('write the texts again when the unit system changes, even for the same result', () => {
+    const doc = network('series', 4);
+    const result = solve(doc, null);
+    const badges = findingsByElement(result.findings);
+    const si = pipeItems(null, doc, result, 'SI', badges);
+    const us = pipeItems(si.cache, doc, result, 'US', badges);
+    expect(us.items[0].flow?.text).toBe(pipeFlow(result.pipes[us.items[0].pipe.id], 'US')?.text);
+    expect(us.items[0].flow?.text).not.toBe(si.items[0].flow?.text);
+    const nodesSi = nodeItems(null, doc, result, 'SI', badges, connected(doc));
+    const nodesUs = nodeItems(nodesSi.cache, doc, result, 'US', badges, connected(doc));
+    const i = nodesUs.items.findIndex((n) => n.pressure !== null);
+    expect(nodesUs.items[i].pressure).toMatch(/psi/);
+    expect(nodesSi.items[i].pressure).toMatch(/kPa|bar/);
+  });
 });

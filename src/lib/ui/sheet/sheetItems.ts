@@ -42,16 +42,17 @@ export interface PipeItem {
   badge: FindingLevel | null;
 }
 
-/** Records of the previous call, by element id, to hand back unchanged ones as they were. */
-export type ItemCache<T> = Map<Id, T>;
+/**
+ * What the previous call handed out, by element id: each record and the result it read its
+ * text from, so an element whose result object and unit system are the same as last time is
+ * not formatted again (an edit that does not solve, or a sheet change in between).
+ */
+export interface ItemCache<T> {
+  system: UnitSystem;
+  entries: Map<Id, { item: T; source: object | undefined }>;
+}
 
 const NO_PORTS: ReadonlySet<string> = new Set();
-
-/** True when two records have the same fields (compared with ===). */
-function sameFields<T extends object>(a: T, b: T): boolean {
-  for (const key in a) if (a[key] !== b[key]) return false;
-  return true;
-}
 
 /** The flow a pipe shows for its result (null without one). */
 export function pipeFlow(result: PipeResult | null, system: UnitSystem): PipeFlow | null {
@@ -69,20 +70,26 @@ export function pipeFlow(result: PipeResult | null, system: UnitSystem): PipeFlo
   };
 }
 
-/**
- * Keep `next` as the record of `id` unless the cache holds one with the same fields; returns
- * the record to use and puts it in `into`.
- */
-function keep<T extends object>(
+/** The cached record of `id` when its text was read from `source` in the same unit system. */
+function readFrom<T>(
   cache: ItemCache<T> | null,
-  into: ItemCache<T>,
+  system: UnitSystem,
   id: Id,
-  next: T,
-): T {
-  const old = cache?.get(id);
-  const item = old && sameFields(old, next) ? old : next;
-  into.set(id, item);
-  return item;
+  source: object | undefined,
+): T | undefined {
+  const entry = cache?.system === system ? cache.entries.get(id) : undefined;
+  return entry && entry.source === source ? entry.item : undefined;
+}
+
+/** `next`, or `old` when it shows the same. */
+function keptFlow(old: PipeFlow | null | undefined, next: PipeFlow | null): PipeFlow | null {
+  const same =
+    old &&
+    next &&
+    old.text === next.text &&
+    old.reversed === next.reversed &&
+    old.noFlow === next.noFlow;
+  return same ? old : next;
 }
 
 /** Records of the nodes of `doc`, reusing those of `cache` that are unchanged. */
@@ -94,22 +101,34 @@ export function nodeItems(
   badges: ReadonlyMap<Id, { level: FindingLevel }>,
   connected: ReadonlyMap<Id, ReadonlySet<string>>,
 ): { items: NodeItem[]; cache: ItemCache<NodeItem> } {
-  const into: ItemCache<NodeItem> = new Map();
-  const items = Object.values(doc.nodes).map((node) =>
-    keep(cache, into, node.id, {
-      node,
-      pressure: nodePressureText(result?.nodes[node.id], portsOf(node)[0], system),
-      badge: badges.get(node.id)?.level ?? null,
-      connected: connected.get(node.id) ?? NO_PORTS,
-    }),
-  );
+  const into: ItemCache<NodeItem> = { system, entries: new Map() };
+  const items = Object.values(doc.nodes).map((node) => {
+    const source = result?.nodes[node.id];
+    const port = portsOf(node)[0];
+    const read = readFrom(cache, system, node.id, source);
+    const pressure =
+      read && (read.node === node || portsOf(read.node)[0] === port)
+        ? read.pressure
+        : nodePressureText(source, port, system);
+    const badge = badges.get(node.id)?.level ?? null;
+    const ports = connected.get(node.id) ?? NO_PORTS;
+    const old = cache?.entries.get(node.id)?.item;
+    const same =
+      old &&
+      old.node === node &&
+      old.pressure === pressure &&
+      old.badge === badge &&
+      old.connected === ports;
+    const item = same ? old : { node, pressure, badge, connected: ports };
+    into.entries.set(node.id, { item, source });
+    return item;
+  });
   return { items, cache: into };
 }
 
 /**
  * Records of the pipes of `doc` whose both end nodes exist, reusing those of `cache` that are
- * unchanged. A pipe's flow record is kept too while its fields are the same, so the pipe's
- * record is.
+ * unchanged. A pipe's flow record is kept too while it shows the same, so the pipe's record is.
  */
 export function pipeItems(
   cache: ItemCache<PipeItem> | null,
@@ -118,23 +137,27 @@ export function pipeItems(
   system: UnitSystem,
   badges: ReadonlyMap<Id, { level: FindingLevel }>,
 ): { items: PipeItem[]; cache: ItemCache<PipeItem> } {
-  const into: ItemCache<PipeItem> = new Map();
+  const into: ItemCache<PipeItem> = { system, entries: new Map() };
   const items: PipeItem[] = [];
   for (const pipe of Object.values(doc.pipes)) {
     const from = doc.nodes[pipe.from.node];
     const to = doc.nodes[pipe.to.node];
     if (!from || !to) continue;
-    const old = cache?.get(pipe.id)?.flow;
-    const flow = pipeFlow(result?.pipes[pipe.id] ?? null, system);
-    items.push(
-      keep(cache, into, pipe.id, {
-        pipe,
-        from,
-        to,
-        flow: old && flow && sameFields(old, flow) ? old : flow,
-        badge: badges.get(pipe.id)?.level ?? null,
-      }),
-    );
+    const source = result?.pipes[pipe.id];
+    const old = cache?.entries.get(pipe.id)?.item;
+    const read = readFrom(cache, system, pipe.id, source);
+    const flow = read ? read.flow : keptFlow(old?.flow, pipeFlow(source ?? null, system));
+    const badge = badges.get(pipe.id)?.level ?? null;
+    const same =
+      old &&
+      old.pipe === pipe &&
+      old.from === from &&
+      old.to === to &&
+      old.flow === flow &&
+      old.badge === badge;
+    const item = same ? old : { pipe, from, to, flow, badge };
+    into.entries.set(pipe.id, { item, source });
+    items.push(item);
   }
   return { items, cache: into };
 }
