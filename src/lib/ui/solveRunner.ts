@@ -11,6 +11,8 @@
 import type { HeadrouteDocument, Id } from '../model/types';
 import { solve } from '../solver/solve';
 import type { SolveRequest, SolveResponse } from '../solver/worker';
+import { docDelta } from './docDelta';
+import type { WorkerRequest } from './solveWorker';
 
 export interface SolveRunner {
   request(doc: HeadrouteDocument, revision: number, caseId: Id | null): void;
@@ -59,15 +61,24 @@ export function createInlineRunner(
   };
 }
 
-/** Solve in a Web Worker; falls back to the page if the worker fails. */
+/**
+ * Solve in a Web Worker running solveWorker.ts; falls back to the page if the worker fails.
+ * After the first document, each request sends only the records that changed (docDelta.ts).
+ */
 export function createWorkerRunner(worker: Worker, deliver: Deliver, fail: Fail): SolveRunner {
   let busy = false;
   let pending: SolveRequest | null = null;
   let fallback: SolveRunner | null = null;
+  /** The document the worker holds (the last one sent). */
+  let sent: HeadrouteDocument | null = null;
   const send = () => {
     if (busy || !pending) return;
     busy = true;
-    worker.postMessage(pending);
+    const { doc, revision, caseId } = pending;
+    const delta = sent && docDelta(sent, doc);
+    const request: WorkerRequest = delta ? { revision, caseId, delta } : { revision, caseId, doc };
+    worker.postMessage(request);
+    sent = doc;
     pending = null;
   };
   worker.onmessage = (event: MessageEvent<SolveResponse>) => {
@@ -153,7 +164,7 @@ export function createAdaptiveRunner(
 export function createSolveRunner(deliver: Deliver, fail: Fail): SolveRunner {
   if (typeof Worker !== 'undefined') {
     try {
-      const worker = new Worker(new URL('../solver/worker.ts', import.meta.url), {
+      const worker = new Worker(new URL('./solveWorker.ts', import.meta.url), {
         type: 'module',
       });
       return createAdaptiveRunner(createWorkerRunner(worker, deliver, fail), deliver, fail);

@@ -1,0 +1,117 @@
+/**
+ * Documents sent to the solver's worker as the records that changed: applying the delta to the
+ * document before gives the document after (same values, records in the same order), and the
+ * worker solves it exactly as the whole document.
+ */
+import { describe, expect, it } from 'vitest';
+import { network } from '../../bench/networks';
+import {
+  deleteElements,
+  moveNodes,
+  updateNode,
+  updateSettings,
+} from '../../src/lib/model/commands';
+import { History } from '../../src/lib/model/history';
+import type { HeadrouteDocument } from '../../src/lib/model/types';
+import { solve } from '../../src/lib/solver/solve';
+import type { SolveResponse } from '../../src/lib/solver/worker';
+import { applyDocDelta, docDelta } from '../../src/lib/ui/docDelta';
+import { createWorkerRunner } from '../../src/lib/ui/solveRunner';
+import type { WorkerRequest } from '../../src/lib/ui/solveWorker';
+
+const waypointOf = (doc: HeadrouteDocument) =>
+  Object.values(doc.nodes).find((n) => n.kind === 'waypoint')!;
+
+describe('docDelta', () => {
+  it('carries only the changed records and rebuilds the document after', () => {
+    const history = new History(network('series', 20));
+    const before = history.doc;
+    const w = waypointOf(before);
+    history.apply(updateNode(w.id, { z: w.z + 1.5 }));
+    const after = history.doc;
+    const delta = docDelta(before, after)!;
+    expect(Object.keys(delta.nodes)).toEqual([w.id]);
+    expect(delta.pipes).toEqual({});
+    expect(delta.fields).toEqual({});
+    const rebuilt = applyDocDelta(before, delta);
+    expect(rebuilt).toEqual(after);
+    expect(Object.keys(rebuilt.nodes)).toEqual(Object.keys(after.nodes));
+    expect(before.nodes[w.id].z).toBe(w.z); // the document before is left as it was
+    expect(JSON.stringify(solve(rebuilt, null))).toBe(JSON.stringify(solve(after, null)));
+  });
+
+  it('carries changed settings and moved nodes; none when parts are added or removed', () => {
+    const history = new History(network('series', 6));
+    const first = history.doc;
+    history.apply(updateSettings({ unitSystem: 'US' }));
+    history.apply(moveNodes([waypointOf(first).id], 20, 0));
+    const changed = history.doc;
+    const delta = docDelta(first, changed)!;
+    expect(Object.keys(delta.fields)).toEqual(['settings']);
+    expect(applyDocDelta(first, delta)).toEqual(changed);
+    expect(docDelta(changed, changed)).toEqual({ fields: {}, nodes: {}, pipes: {} });
+
+    history.apply(deleteElements([waypointOf(changed).id]));
+    const removed = history.doc;
+    expect(docDelta(changed, removed)).toBeNull();
+    history.undo(); // the part back: added, so again no delta
+    expect(docDelta(removed, history.doc)).toBeNull();
+    expect(docDelta(first, network('series', 7))).toBeNull();
+  });
+});
+
+describe('worker runner', () => {
+  it('sends the whole document first, then only what changed, and delivers each result', async () => {
+    const posted: WorkerRequest[] = [];
+    const delivered: SolveResponse[] = [];
+    const worker = { postMessage: (m: WorkerRequest) => posted.push(m) } as unknown as Worker;
+    const runner = createWorkerRunner(
+      worker,
+      (r) => delivered.push(r),
+      () => undefined,
+    );
+    // The worker answers with what solveWorker.ts would solve.
+    let held: HeadrouteDocument | null = null;
+    const answer = () => {
+      const request = posted[posted.length - 1];
+      held = 'doc' in request ? request.doc : applyDocDelta(held!, request.delta);
+      worker.onmessage!({
+        data: { revision: request.revision, result: solve(held, request.caseId) },
+      } as MessageEvent<SolveResponse>);
+    };
+    const history = new History(network('series', 8));
+    runner.request(history.doc, 1, null);
+    expect('doc' in posted[0]).toBe(true);
+    answer();
+    const w = waypointOf(history.doc);
+    history.apply(updateNode(w.id, { z: w.z + 1 }));
+    runner.request(history.doc, 2, null);
+    expect('delta' in posted[1]).toBe(true);
+    answer();
+    expect(held).toEqual(history.doc);
+    expect(delivered.map((d) => d.revision)).toEqual([1, 2]);
+    expect(delivered[1].result.nodes[w.id]).toEqual(solve(history.doc, null).nodes[w.id]);
+  });
+});
+
+describe('solveWorker entry', () => {
+  it('answers a whole document, then a delta against it, as solving the document would', async () => {
+    const posted: SolveResponse[] = [];
+    const scope = {
+      onmessage: null as ((event: { data: WorkerRequest }) => void) | null,
+      postMessage: (message: SolveResponse) => posted.push(message),
+    };
+    (globalThis as unknown as { self: typeof scope }).self = scope;
+    await import('../../src/lib/ui/solveWorker');
+    const history = new History(network('series', 8));
+    const before = history.doc;
+    scope.onmessage!({ data: { revision: 1, caseId: null, doc: before } });
+    const w = waypointOf(before);
+    history.apply(updateNode(w.id, { z: w.z - 2 }));
+    const delta = docDelta(before, history.doc)!;
+    scope.onmessage!({ data: { revision: 2, caseId: null, delta } });
+    expect(posted.map((p) => p.revision)).toEqual([1, 2]);
+    expect(JSON.stringify(posted[1].result)).toBe(JSON.stringify(solve(history.doc, null)));
+    delete (globalThis as { self?: unknown }).self;
+  });
+});
