@@ -21,6 +21,9 @@ const connected = (doc: HeadrouteDocument) => {
   return connectedOf.get(doc.pipes)!;
 };
 
+const SI = { system: 'SI', texts: true } as const;
+const US = { system: 'US', texts: true } as const;
+
 const items = (
   doc: HeadrouteDocument,
   result: SolveResult | null,
@@ -30,8 +33,8 @@ const items = (
   },
 ) => {
   const badges = findingsByElement(result?.findings ?? []);
-  const nodes = nodeItems(caches.nodes?.cache ?? null, doc, result, 'SI', badges, connected(doc));
-  const pipes = pipeItems(caches.pipes?.cache ?? null, doc, result, 'SI', badges);
+  const nodes = nodeItems(caches.nodes?.cache ?? null, doc, result, SI, badges, connected(doc));
+  const pipes = pipeItems(caches.pipes?.cache ?? null, doc, result, SI, badges);
   return { nodes, pipes };
 };
 
@@ -102,14 +105,40 @@ describe('sheet items', () => {
     const doc = network('series', 4);
     const result = solve(doc, null);
     const badges = findingsByElement(result.findings);
-    const si = pipeItems(null, doc, result, 'SI', badges);
-    const us = pipeItems(si.cache, doc, result, 'US', badges);
+    const si = pipeItems(null, doc, result, SI, badges);
+    const us = pipeItems(si.cache, doc, result, US, badges);
     expect(us.items[0].flow?.text).toBe(pipeFlow(result.pipes[us.items[0].pipe.id], 'US')?.text);
     expect(us.items[0].flow?.text).not.toBe(si.items[0].flow?.text);
-    const nodesSi = nodeItems(null, doc, result, 'SI', badges, connected(doc));
-    const nodesUs = nodeItems(nodesSi.cache, doc, result, 'US', badges, connected(doc));
+    const nodesSi = nodeItems(null, doc, result, SI, badges, connected(doc));
+    const nodesUs = nodeItems(nodesSi.cache, doc, result, US, badges, connected(doc));
     const i = nodesUs.items.findIndex((n) => n.pressure !== null);
     expect(nodesUs.items[i].pressure).toMatch(/psi/);
     expect(nodesSi.items[i].pressure).toMatch(/kPa|bar/);
+  });
+
+  it('at far zoom carry no result texts, so a new solve leaves every record as it was', () => {
+    const history = new History(network('series', 8));
+    const far = { system: 'SI', texts: false } as const;
+    const first = solve(history.doc, null);
+    const badges = findingsByElement(first.findings);
+    const ports = connected(history.doc);
+    const nodes = nodeItems(null, history.doc, first, far, badges, ports);
+    const pipes = pipeItems(null, history.doc, first, far, badges);
+    expect(nodes.items.every((n) => n.pressure === null)).toBe(true);
+    // The arrow and the dashes still follow the result; only the text is left out.
+    expect(pipes.items[0].flow).toEqual({ text: null, reversed: false, noFlow: false });
+
+    const second = solve(history.doc, null); // a new result object with the same figures
+    const nodesAgain = nodeItems(nodes.cache, history.doc, second, far, badges, ports);
+    const pipesAgain = pipeItems(pipes.cache, history.doc, second, far, badges);
+    expect(nodesAgain.items.every((n, i) => n === nodes.items[i])).toBe(true);
+    expect(pipesAgain.items.every((p, i) => p === pipes.items[i])).toBe(true);
+
+    // Zoomed in again: the texts are made.
+    const near = pipeItems(pipesAgain.cache, history.doc, second, SI, badges);
+    expect(near.items[0].flow?.text).toBe(
+      pipeFlow(second.pipes[near.items[0].pipe.id], 'SI')?.text,
+    );
+    expect(near.items[0].flow?.text).not.toBeNull();
   });
 });

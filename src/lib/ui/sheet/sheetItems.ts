@@ -49,35 +49,45 @@ export interface PipeItem {
  */
 export interface ItemCache<T> {
   system: UnitSystem;
+  texts: boolean;
   entries: Map<Id, { item: T; source: object | undefined }>;
 }
 
 const NO_PORTS: ReadonlySet<string> = new Set();
 
-/** The flow a pipe shows for its result (null without one). */
-export function pipeFlow(result: PipeResult | null, system: UnitSystem): PipeFlow | null {
+/**
+ * The flow a pipe shows for its result (null without one); without its text when `withText` is
+ * false (texts are not drawn at far zoom).
+ */
+export function pipeFlow(
+  result: PipeResult | null,
+  system: UnitSystem,
+  withText = true,
+): PipeFlow | null {
   if (!result) return null;
   const flow = result.flow;
   const q = shownFlow(flow);
   return {
-    text: !Number.isFinite(flow)
-      ? null
-      : q === 0
-        ? 'no flow'
-        : formatQuantity(q, 'volumeFlow', system, { digits: 3 }),
+    text:
+      !withText || !Number.isFinite(flow)
+        ? null
+        : q === 0
+          ? 'no flow'
+          : formatQuantity(q, 'volumeFlow', system, { digits: 3 }),
     reversed: flow < 0,
     noFlow: result.regime === 'no-flow' || q === 0,
   };
 }
 
-/** The cached record of `id` when its text was read from `source` in the same unit system. */
+/** The cached record of `id` when its text was read from `source` with the same settings. */
 function readFrom<T>(
   cache: ItemCache<T> | null,
-  system: UnitSystem,
+  into: ItemCache<T>,
   id: Id,
   source: object | undefined,
 ): T | undefined {
-  const entry = cache?.system === system ? cache.entries.get(id) : undefined;
+  const same = cache && cache.system === into.system && cache.texts === into.texts;
+  const entry = same ? cache.entries.get(id) : undefined;
   return entry && entry.source === source ? entry.item : undefined;
 }
 
@@ -92,22 +102,32 @@ function keptFlow(old: PipeFlow | null | undefined, next: PipeFlow | null): Pipe
   return same ? old : next;
 }
 
+/**
+ * What the layers show of the result: in which units, and whether with texts (none at far
+ * zoom, where they would be a few pixels high: then a solve changes almost no record).
+ */
+export interface ShownTexts {
+  system: UnitSystem;
+  texts: boolean;
+}
+
 /** Records of the nodes of `doc`, reusing those of `cache` that are unchanged. */
 export function nodeItems(
   cache: ItemCache<NodeItem> | null,
   doc: HeadrouteDocument,
   result: SolveResult | null,
-  system: UnitSystem,
+  { system, texts }: ShownTexts,
   badges: ReadonlyMap<Id, { level: FindingLevel }>,
   connected: ReadonlyMap<Id, ReadonlySet<string>>,
 ): { items: NodeItem[]; cache: ItemCache<NodeItem> } {
-  const into: ItemCache<NodeItem> = { system, entries: new Map() };
+  const into: ItemCache<NodeItem> = { system, texts, entries: new Map() };
   const items = Object.values(doc.nodes).map((node) => {
     const source = result?.nodes[node.id];
     const port = portsOf(node)[0];
-    const read = readFrom(cache, system, node.id, source);
-    const pressure =
-      read && (read.node === node || portsOf(read.node)[0] === port)
+    const read = readFrom(cache, into, node.id, source);
+    const pressure = !texts
+      ? null
+      : read && (read.node === node || portsOf(read.node)[0] === port)
         ? read.pressure
         : nodePressureText(source, port, system);
     const badge = badges.get(node.id)?.level ?? null;
@@ -134,10 +154,10 @@ export function pipeItems(
   cache: ItemCache<PipeItem> | null,
   doc: HeadrouteDocument,
   result: SolveResult | null,
-  system: UnitSystem,
+  { system, texts }: ShownTexts,
   badges: ReadonlyMap<Id, { level: FindingLevel }>,
 ): { items: PipeItem[]; cache: ItemCache<PipeItem> } {
-  const into: ItemCache<PipeItem> = { system, entries: new Map() };
+  const into: ItemCache<PipeItem> = { system, texts, entries: new Map() };
   const items: PipeItem[] = [];
   for (const pipe of Object.values(doc.pipes)) {
     const from = doc.nodes[pipe.from.node];
@@ -145,8 +165,8 @@ export function pipeItems(
     if (!from || !to) continue;
     const source = result?.pipes[pipe.id];
     const old = cache?.entries.get(pipe.id)?.item;
-    const read = readFrom(cache, system, pipe.id, source);
-    const flow = read ? read.flow : keptFlow(old?.flow, pipeFlow(source ?? null, system));
+    const read = readFrom(cache, into, pipe.id, source);
+    const flow = read ? read.flow : keptFlow(old?.flow, pipeFlow(source ?? null, system, texts));
     const badge = badges.get(pipe.id)?.level ?? null;
     const same =
       old &&
