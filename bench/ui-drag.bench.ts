@@ -479,7 +479,7 @@ async function main() {
       await measure(page, `${example.title}: sheet drag`, cdp, 'sheet');
       await measure(page, `${example.title}: waypoint elevation`, cdp, 'profile');
     }
-    if (only && !'generated'.includes(only)) return;
+    if (only && !'generated'.includes(only)) return await browser.close();
     await page.locator('input[type="file"]').setInputFiles({
       name: 'generated.headroute.json',
       mimeType: 'application/json',
