@@ -27,7 +27,10 @@ export function addNode(kind: NodeKind, at: { x: number; y: number }, props?: No
       const id = props?.id ?? nextId(draft, ID_PREFIX[kind]);
       const idError = checkNewId(draft, id);
       if (idError) return idError;
-      const node = createNode(kind, at, id, draft.settings.unitSystem) as unknown as Record<string, unknown>;
+      const node = createNode(kind, at, id, draft.settings.unitSystem) as unknown as Record<
+        string,
+        unknown
+      >;
       if (props) assignPatch(node, { ...props, id });
       const invalid = validateRecord(NodeSchema, node, id);
       if (invalid) return invalid;

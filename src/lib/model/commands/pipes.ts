@@ -28,7 +28,10 @@ export function connect(from: PortRef, to: PortRef, props?: PipePatch): Command 
       const id = props?.id ?? nextId(draft, ID_PREFIX.pipe);
       const idError = checkNewId(draft, id);
       if (idError) return idError;
-      const pipe = createPipe(from, to, id, draft.settings.unitSystem) as unknown as Record<string, unknown>;
+      const pipe = createPipe(from, to, id, draft.settings.unitSystem) as unknown as Record<
+        string,
+        unknown
+      >;
       if (props) assignPatch(pipe, { ...props, id, from: { ...from }, to: { ...to } });
       const invalid = validateRecord(PipeSchema, pipe, id);
       if (invalid) return invalid;
