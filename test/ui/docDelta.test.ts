@@ -14,10 +14,9 @@ import {
 import { History } from '../../src/lib/model/history';
 import type { HeadrouteDocument } from '../../src/lib/model/types';
 import { solve } from '../../src/lib/solver/solve';
-import type { SolveResponse } from '../../src/lib/solver/worker';
-import { applyDocDelta, docDelta } from '../../src/lib/ui/docDelta';
+import type { SolveRequest, SolveResponse } from '../../src/lib/solver/worker';
+import { applyDocDelta, docDelta } from '../../src/lib/model/docDelta';
 import { createWorkerRunner } from '../../src/lib/ui/solveRunner';
-import type { WorkerRequest } from '../../src/lib/ui/solveWorker';
 
 const waypointOf = (doc: HeadrouteDocument) =>
   Object.values(doc.nodes).find((n) => n.kind === 'waypoint')!;
@@ -62,15 +61,15 @@ describe('docDelta', () => {
 
 describe('worker runner', () => {
   it('sends the whole document first, then only what changed, and delivers each result', async () => {
-    const posted: WorkerRequest[] = [];
+    const posted: SolveRequest[] = [];
     const delivered: SolveResponse[] = [];
-    const worker = { postMessage: (m: WorkerRequest) => posted.push(m) } as unknown as Worker;
+    const worker = { postMessage: (m: SolveRequest) => posted.push(m) } as unknown as Worker;
     const runner = createWorkerRunner(
       worker,
       (r) => delivered.push(r),
       () => undefined,
     );
-    // The worker answers with what solveWorker.ts would solve.
+    // The worker answers with what solver/worker.ts would solve.
     let held: HeadrouteDocument | null = null;
     const answer = () => {
       const request = posted[posted.length - 1];
@@ -94,15 +93,15 @@ describe('worker runner', () => {
   });
 });
 
-describe('solveWorker entry', () => {
+describe('the worker entry (solver/worker.ts)', () => {
   it('answers a whole document, then a delta against it, as solving the document would', async () => {
     const posted: SolveResponse[] = [];
     const scope = {
-      onmessage: null as ((event: { data: WorkerRequest }) => void) | null,
+      onmessage: null as ((event: { data: SolveRequest }) => void) | null,
       postMessage: (message: SolveResponse) => posted.push(message),
     };
     (globalThis as unknown as { self: typeof scope }).self = scope;
-    await import('../../src/lib/ui/solveWorker');
+    await import('../../src/lib/solver/worker');
     const history = new History(network('series', 8));
     const before = history.doc;
     scope.onmessage!({ data: { revision: 1, caseId: null, doc: before } });

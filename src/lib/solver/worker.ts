@@ -1,17 +1,18 @@
 /**
- * Web Worker entry for the app: receives {revision, doc, caseId}, posts {revision, result}.
- * The app keeps the newest revision and drops results that come back for older ones.
+ * Web Worker entry for the app's background solves: receives {revision, caseId} with either the
+ * whole document or only what changed since the document of the request before
+ * (model/docDelta.ts), which this worker keeps; posts {revision, result}. The app keeps the
+ * newest revision and drops results that come back for older ones.
  */
+import { applyDocDelta, type DocDelta } from '../model/docDelta';
 import type { HeadrouteDocument, Id } from '../model/types';
 import { solve } from './solve';
 import type { SolveResult } from './types';
 
-/** Message the app sends to the worker. */
-export interface SolveRequest {
-  revision: number;
-  doc: HeadrouteDocument;
-  caseId: Id | null;
-}
+/** Message the app sends to the worker: the whole document, or the changes to the last one. */
+export type SolveRequest = { revision: number; caseId: Id | null } & (
+  { doc: HeadrouteDocument } | { delta: DocDelta }
+);
 
 /** Message the worker posts back. */
 export interface SolveResponse {
@@ -24,7 +25,13 @@ const scope = self as unknown as {
   postMessage(message: SolveResponse): void;
 };
 
+/** The document of the last request. */
+let last: HeadrouteDocument | null = null;
+
 scope.onmessage = (event) => {
-  const { revision, doc, caseId } = event.data;
-  scope.postMessage({ revision, result: solve(doc, caseId) });
+  const request = event.data;
+  if ('doc' in request) last = request.doc;
+  else if (last) last = applyDocDelta(last, request.delta);
+  else throw new Error('a change arrived before any document');
+  scope.postMessage({ revision: request.revision, result: solve(last, request.caseId) });
 };

@@ -11,8 +11,14 @@
 import type { HeadrouteDocument, Id } from '../model/types';
 import { solve } from '../solver/solve';
 import type { SolveRequest, SolveResponse } from '../solver/worker';
-import { docDelta } from './docDelta';
-import type { WorkerRequest } from './solveWorker';
+
+/** A document waiting to be solved. */
+interface Job {
+  revision: number;
+  doc: HeadrouteDocument;
+  caseId: Id | null;
+}
+import { docDelta } from '../model/docDelta';
 
 export interface SolveRunner {
   request(doc: HeadrouteDocument, revision: number, caseId: Id | null): void;
@@ -32,7 +38,7 @@ export function createInlineRunner(
   observe?: (ms: number, doc: HeadrouteDocument) => void,
   now: () => number = () => performance.now(),
 ): SolveRunner {
-  let pending: SolveRequest | null = null;
+  let pending: Job | null = null;
   let scheduled = false;
   const run = () => {
     scheduled = false;
@@ -62,12 +68,12 @@ export function createInlineRunner(
 }
 
 /**
- * Solve in a Web Worker running solveWorker.ts; falls back to the page if the worker fails.
+ * Solve in a Web Worker running solver/worker.ts; falls back to the page if the worker fails.
  * After the first document, each request sends only the records that changed (docDelta.ts).
  */
 export function createWorkerRunner(worker: Worker, deliver: Deliver, fail: Fail): SolveRunner {
   let busy = false;
-  let pending: SolveRequest | null = null;
+  let pending: Job | null = null;
   let fallback: SolveRunner | null = null;
   /** The document the worker holds (the last one sent). */
   let sent: HeadrouteDocument | null = null;
@@ -76,7 +82,7 @@ export function createWorkerRunner(worker: Worker, deliver: Deliver, fail: Fail)
     busy = true;
     const { doc, revision, caseId } = pending;
     const delta = sent && docDelta(sent, doc);
-    const request: WorkerRequest = delta ? { revision, caseId, delta } : { revision, caseId, doc };
+    const request: SolveRequest = delta ? { revision, caseId, delta } : { revision, caseId, doc };
     worker.postMessage(request);
     sent = doc;
     pending = null;
@@ -164,7 +170,7 @@ export function createAdaptiveRunner(
 export function createSolveRunner(deliver: Deliver, fail: Fail): SolveRunner {
   if (typeof Worker !== 'undefined') {
     try {
-      const worker = new Worker(new URL('./solveWorker.ts', import.meta.url), {
+      const worker = new Worker(new URL('../solver/worker.ts', import.meta.url), {
         type: 'module',
       });
       return createAdaptiveRunner(createWorkerRunner(worker, deliver, fail), deliver, fail);
