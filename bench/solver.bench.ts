@@ -75,8 +75,9 @@ function benchNetworks(): void {
       'solve of the sheet, which also decides how to solve its node equations (a direct factor ' +
       'and its ordering, or for a big mesh multigrid-preconditioned conjugate gradients: ' +
       'sparse/linearSolver.ts); the timed repeats reuse that. ' +
-      'clone ms: median wall time of solving a fresh structured clone of the sheet each repeat, ' +
-      "as the app's solver worker receives it on every edit or drag step (not counting the clone).",
+      'clone ms: median wall time of solving a fresh structured clone of the sheet each repeat ' +
+      "(not counting the clone): a document whose records are all new objects, as the app's " +
+      'solver worker holds after it receives a whole document or applies a change to one.',
   );
   const head = ['shape', 'target', 'pipes', 'first ms', 'wall ms', 'min wall', 'CPU ms', 'runs'];
   console.log(
