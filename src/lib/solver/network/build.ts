@@ -189,26 +189,16 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
     switch (node.kind) {
       case 'vessel':
       case 'boundary': {
-        if (node.kind === 'boundary' && node.holds === 'flow') {
-          const outflow = node.outflow ?? 0;
-          if (!Number.isFinite(outflow)) {
-            out.push(
-              findings.invalidInput(
-                node.name,
-                'its flow is not a number; it is left out of the solve',
-                node.id,
-              ),
-            );
-            continue;
-          }
-          portNode[s] = newNode(i, null);
-          demand[portNode[s]] = outflow;
-          break;
-        }
         const at = fixedHeadOf(node, fluid.atmosphericPressure, rhoG);
         if ('problem' in at) {
           out.push(findings.invalidInput(node.name, at.problem, node.id));
           continue;
+        }
+        if ('demand' in at) {
+          // A boundary holding a flow: a free node that the demand leaves.
+          portNode[s] = newNode(i, null);
+          demand[portNode[s]] = at.demand;
+          break;
         }
         portNode.fill(newNode(i, at.head), s, portStart[i + 1]);
         // A nozzle above the liquid opens into the gas space: a fixed head of its own there.

@@ -23,15 +23,22 @@ export function vesselGasHead(vessel: Vessel, atmosphericPressure: number, rhoG:
 }
 
 /**
- * The fixed head of a vessel (liquid level plus gas head) or of a boundary (its elevation plus
- * its gauge pressure head), m, with the vessel's gas head; or why it cannot be used (the words
- * go into the invalid-input finding that leaves the element out of the solve).
+ * What a vessel or a boundary holds: the fixed head of a vessel (liquid level plus gas head) or
+ * of a pressure boundary (its elevation plus its gauge pressure head), m, with the vessel's gas
+ * head; the demand of a boundary that holds a flow (m³/s leaving the sheet there); or why it
+ * cannot be used (the words go into the invalid-input finding that leaves it out of the solve).
  */
 export function fixedHeadOf(
   node: Vessel | Boundary,
   atmosphericPressure: number,
   rhoG: number,
-): { head: number; gas: number } | { problem: string } {
+): { head: number; gas: number } | { demand: number } | { problem: string } {
+  if (node.kind === 'boundary' && node.holds === 'flow') {
+    const demand = node.outflow ?? 0;
+    return Number.isFinite(demand)
+      ? { demand }
+      : { problem: 'its flow is not a number; it is left out of the solve' };
+  }
   if (node.kind === 'boundary') {
     const head = node.z + (node.pressureAbs - atmosphericPressure) / rhoG;
     return Number.isFinite(head) && node.pressureAbs >= 0
