@@ -1,16 +1,27 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { network } from '../../bench/networks';
+import { updateNode } from '../../src/lib/model/commands';
+import { docDelta } from '../../src/lib/model/docDelta';
+import { History } from '../../src/lib/model/history';
+import { solve } from '../../src/lib/solver/solve';
 import type { SolveRequest, SolveResponse } from '../../src/lib/solver/worker';
 import { at, Sheet } from './helpers';
 
 describe('solver worker entry', () => {
-  it('answers {revision, doc, caseId} with {revision, result}', async () => {
-    const posted: SolveResponse[] = [];
-    const scope = {
-      onmessage: null as ((event: { data: SolveRequest }) => void) | null,
-      postMessage: (message: SolveResponse) => posted.push(message),
-    };
+  // The module sets `self.onmessage` once when it is first imported: one scope for the file.
+  const posted: SolveResponse[] = [];
+  const scope = {
+    onmessage: null as ((event: { data: SolveRequest }) => void) | null,
+    postMessage: (message: SolveResponse) => posted.push(message),
+  };
+  beforeAll(async () => {
     (globalThis as unknown as { self: typeof scope }).self = scope;
     await import('../../src/lib/solver/worker');
+    delete (globalThis as { self?: unknown }).self;
+  });
+
+  it('answers {revision, doc, caseId} with {revision, result}', () => {
+    posted.length = 0;
     const s = new Sheet();
     s.vessel('A', 10);
     s.vessel('B', 5);
@@ -20,6 +31,18 @@ describe('solver worker entry', () => {
     expect(posted[0].revision).toBe(7);
     expect(posted[0].result.converged).toBe(true);
     expect(posted[0].result.pipes.P1.flow).toBeGreaterThan(0);
-    delete (globalThis as { self?: unknown }).self;
+  });
+
+  it('answers a whole document, then a delta against it, as solving the document would', () => {
+    posted.length = 0;
+    const history = new History(network('series', 8));
+    const before = history.doc;
+    scope.onmessage!({ data: { revision: 1, caseId: null, doc: before } });
+    const w = Object.values(before.nodes).find((n) => n.kind === 'waypoint')!;
+    history.apply(updateNode(w.id, { z: w.z - 2 }));
+    const delta = docDelta(before, history.doc)!;
+    scope.onmessage!({ data: { revision: 2, caseId: null, delta } });
+    expect(posted.map((p) => p.revision)).toEqual([1, 2]);
+    expect(JSON.stringify(posted[1].result)).toBe(JSON.stringify(solve(history.doc, null)));
   });
 });

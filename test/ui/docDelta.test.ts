@@ -92,25 +92,3 @@ describe('worker runner', () => {
     expect(delivered[1].result.nodes[w.id]).toEqual(solve(history.doc, null).nodes[w.id]);
   });
 });
-
-describe('the worker entry (solver/worker.ts)', () => {
-  it('answers a whole document, then a delta against it, as solving the document would', async () => {
-    const posted: SolveResponse[] = [];
-    const scope = {
-      onmessage: null as ((event: { data: SolveRequest }) => void) | null,
-      postMessage: (message: SolveResponse) => posted.push(message),
-    };
-    (globalThis as unknown as { self: typeof scope }).self = scope;
-    await import('../../src/lib/solver/worker');
-    const history = new History(network('series', 8));
-    const before = history.doc;
-    scope.onmessage!({ data: { revision: 1, caseId: null, doc: before } });
-    const w = waypointOf(before);
-    history.apply(updateNode(w.id, { z: w.z - 2 }));
-    const delta = docDelta(before, history.doc)!;
-    scope.onmessage!({ data: { revision: 2, caseId: null, delta } });
-    expect(posted.map((p) => p.revision)).toEqual([1, 2]);
-    expect(JSON.stringify(posted[1].result)).toBe(JSON.stringify(solve(history.doc, null)));
-    delete (globalThis as { self?: unknown }).self;
-  });
-});
