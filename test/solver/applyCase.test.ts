@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { addCase, applyCommand, deleteElements } from '../../src/lib/model/commands';
 import { applyCase } from '../../src/lib/solver/applyCase';
 import { solve } from '../../src/lib/solver/solve';
 import { at, Sheet } from './helpers';
@@ -58,5 +59,40 @@ describe('applyCase', () => {
     const unknown = solve(s.doc, 'nope');
     expect(unknown.findings.map((f) => f.code)).toContain('unknown-case');
     expect(unknown.pumps.P.flow).toBeCloseTo(base.pumps.P.flow, 12);
+  });
+});
+
+describe('a case changes what a boundary holds', () => {
+  it('a header pressure and a draw-off flow per case; deleting the boundary drops its overrides', () => {
+    const s = new Sheet();
+    s.vessel('T', 20, { nozzleZ: 0 });
+    s.node('junction', 'J', { z: 0 });
+    s.boundary('H', 0, 301_325);
+    s.drawOff('D', 0, 10 / 3600);
+    s.pipe('TJ', at('T', 'N1'), at('J', 'hub'), { diameter: 0.08 });
+    s.pipe('JH', at('J', 'hub'), at('H', 'p'), { diameter: 0.05 });
+    s.pipe('JD', at('J', 'hub'), at('D', 'p'), { diameter: 0.05 });
+    const added = applyCommand(
+      s.doc,
+      addCase('Header up, more drawn', {
+        boundaries: { H: { pressureAbs: 401_325 }, D: { outflow: 25 / 3600 } },
+      }),
+    );
+    if (!added.ok) throw new Error(added.error.message);
+    const doc = added.doc;
+    const caseId = Object.keys(doc.cases)[0];
+    const working = applyCase(doc, caseId);
+    expect(working.nodes.H).toMatchObject({ pressureAbs: 401_325 });
+    expect(working.nodes.D).toMatchObject({ holds: 'flow', outflow: 25 / 3600 });
+    const base = solve(doc);
+    const other = solve(doc, caseId);
+    expect(base.pipes.JD.flow).toBeCloseTo(10 / 3600, 12);
+    expect(other.pipes.JD.flow).toBeCloseTo(25 / 3600, 12);
+    // A higher header takes less from the tank.
+    expect(other.pipes.JH.flow).toBeLessThan(base.pipes.JH.flow);
+
+    const deleted = applyCommand(doc, deleteElements(['D']));
+    if (!deleted.ok) throw new Error(deleted.error.message);
+    expect(deleted.doc.cases[caseId].overrides.boundaries).toEqual({ H: { pressureAbs: 401_325 } });
   });
 });

@@ -3,6 +3,7 @@
  * ids are unique across the document, every pipe joins two different existing ports and no port
  * carries more pipes than it may, stored routes and case overrides name existing nodes.
  */
+import { CASE_NODE_GROUPS } from './caseTargets';
 import { idInUse } from './ids';
 import { NODE_KIND_LABEL, nodeLabel } from './labels';
 import { hasPort, isMultiPort } from './ports';
@@ -153,13 +154,8 @@ export function checkIntegrity(doc: HeadrouteDocument): DocumentProblem[] {
     });
   }
 
-  const targets = [
-    ['vessels', 'vessel'],
-    ['pumps', 'pump'],
-    ['controlValves', 'control-valve'],
-  ] as const;
   for (const [key, c] of Object.entries(doc.cases)) {
-    for (const [field, kind] of targets) {
+    for (const [field, kind] of CASE_NODE_GROUPS) {
       const map = c.overrides[field];
       if (!map) continue;
       for (const id of Object.keys(map)) {

@@ -265,6 +265,8 @@ export interface CaseOverrides {
     { running?: boolean; speed?: number; mode?: 'rating' | 'duty'; dutyFlow?: number }
   >;
   controlValves?: Record<Id, { opening?: number }>;
+  /** A boundary's pressure (Pa abs) or, when it holds a flow, its outflow (m³/s). */
+  boundaries?: Record<Id, { pressureAbs?: number; outflow?: number }>;
 }
 
 /** A named set of overrides (an operating case). */

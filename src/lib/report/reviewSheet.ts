@@ -130,6 +130,14 @@ function caseOverridesText(doc: HeadrouteDocument, caseId: Id): string {
       parts.push(`${name(id)} opening ${formatQuantity(v.opening, 'fraction', system)}`);
     }
   }
+  for (const [id, v] of Object.entries(o.boundaries ?? {})) {
+    if (v.pressureAbs !== undefined) {
+      parts.push(`${name(id)} ${formatQuantity(v.pressureAbs, 'pressureAbs', system)}`);
+    }
+    if (v.outflow !== undefined) {
+      parts.push(`${name(id)} outflow ${formatQuantity(v.outflow, 'volumeFlow', system)}`);
+    }
+  }
   return parts.length ? parts.join('; ') : 'no changes from the base case';
 }
 

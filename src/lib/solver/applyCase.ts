@@ -6,7 +6,7 @@ import type { HeadrouteDocument, Id, SheetNode } from '../model/types';
 /**
  * The document as it stands in case `caseId`: the case's overrides (liquid, temperature,
  * atmospheric pressure, vessel levels and gas pressures, pump running/speed/mode/duty flow,
- * control-valve openings) applied to a shallow copy. The base document is never changed.
+ * control-valve openings, boundary pressures or flows) applied to a shallow copy. The base document is never changed.
  * A null, missing or unknown case id gives the base document itself. Overrides naming a node
  * that does not exist, or a node of another kind, are skipped.
  */
@@ -50,6 +50,15 @@ export function applyCase(
     const target = node(id);
     if (target?.kind !== 'control-valve') continue;
     nodes[id] = { ...target, opening: patch.opening ?? target.opening };
+  }
+  for (const [id, patch] of Object.entries(overrides.boundaries ?? {})) {
+    const target = node(id);
+    if (target?.kind !== 'boundary') continue;
+    nodes[id] = {
+      ...target,
+      pressureAbs: patch.pressureAbs ?? target.pressureAbs,
+      outflow: patch.outflow ?? target.outflow,
+    };
   }
   return { ...doc, settings, nodes };
 }

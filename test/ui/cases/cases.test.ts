@@ -25,6 +25,15 @@ describe('withOverride', () => {
     expect(start).toEqual({ temperature: 350 });
     expect(a).toEqual({ temperature: 350, vessels: { T1: { liquidLevel: 0.5 } } });
   });
+
+  it('a boundary flow is its own group, counted and cleared like the others', () => {
+    const a = withOverride({}, { kind: 'boundary', id: 'B1', field: 'outflow' }, 0.002);
+    expect(a).toEqual({ boundaries: { B1: { outflow: 0.002 } } });
+    expect(overrideCount(a)).toBe(1);
+    expect(withOverride(a, { kind: 'boundary', id: 'B1', field: 'outflow' }, undefined)).toEqual(
+      {},
+    );
+  });
 });
 
 describe('caseEnvelope', () => {

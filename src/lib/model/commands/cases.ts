@@ -1,4 +1,5 @@
 /** Commands on cases (named override sets). */
+import { CASE_NODE_GROUPS } from '../caseTargets';
 import { ID_PREFIX, nextId } from '../ids';
 import { MAX_CASES, MAX_NAME_LENGTH } from '../file/limits';
 import { CaseSchema } from '../file/schema';
@@ -8,16 +9,10 @@ import { plain, validateRecord } from './check';
 import { commandErrors } from './errors';
 import type { Draft } from 'immer';
 
-const TARGETS = [
-  ['vessels', 'vessel'],
-  ['pumps', 'pump'],
-  ['controlValves', 'control-valve'],
-] as const;
-
 function checkCase(draft: Draft<HeadrouteDocument>, c: Case) {
   const invalid = validateRecord(CaseSchema, c, c.id);
   if (invalid) return invalid;
-  for (const [field, kind] of TARGETS) {
+  for (const [field, kind] of CASE_NODE_GROUPS) {
     for (const id of Object.keys(c.overrides[field] ?? {})) {
       const node = Object.hasOwn(draft.nodes, id) ? draft.nodes[id] : undefined;
       if (!node || node.kind !== kind) {

@@ -1,4 +1,5 @@
 /** Commands on nodes: add, move, edit, delete (with their pipes). */
+import { CASE_NODE_GROUPS } from '../caseTargets';
 import { createNode } from '../defaults';
 import { ID_PREFIX, nextId } from '../ids';
 import { MAX_COORDINATE, MAX_ELEMENTS } from '../file/limits';
@@ -139,7 +140,7 @@ export function deleteElements(ids: readonly Id[]): Command {
         else route.nodes = kept;
       }
       for (const c of Object.values(draft.cases)) {
-        for (const field of ['vessels', 'pumps', 'controlValves'] as const) {
+        for (const [field] of CASE_NODE_GROUPS) {
           const map = c.overrides[field];
           if (!map) continue;
           for (const id of nodes) if (Object.hasOwn(map, id)) delete map[id];

@@ -237,6 +237,12 @@ const overrides = v.object({
     ),
   ),
   controlValves: v.optional(v.record(IdSchema, v.object({ opening: v.optional(fraction) }))),
+  boundaries: v.optional(
+    v.record(
+      IdSchema,
+      v.object({ pressureAbs: v.optional(positive), outflow: v.optional(finite) }),
+    ),
+  ),
 });
 
 /** A case (named overrides). */

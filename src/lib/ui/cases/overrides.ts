@@ -3,6 +3,7 @@
  * every change returns new override records; emptied groups are dropped, so "as the base case"
  * is simply the absence of a value.
  */
+import { CASE_NODE_GROUPS } from '../../model/caseTargets';
 import type { CaseOverrides, Id, LiquidChoice } from '../../model/types';
 
 /** One overridable field of a case. */
@@ -12,12 +13,18 @@ export type OverrideField =
   | { kind: 'atmosphericPressure' }
   | { kind: 'vessel'; id: Id; field: 'liquidLevel' | 'gasPressureAbs' }
   | { kind: 'pump'; id: Id; field: 'running' | 'speed' | 'mode' | 'dutyFlow' }
-  | { kind: 'controlValve'; id: Id; field: 'opening' };
+  | { kind: 'controlValve'; id: Id; field: 'opening' }
+  | { kind: 'boundary'; id: Id; field: 'pressureAbs' | 'outflow' };
 
 /** A value an override can hold. */
 export type OverrideValue = number | boolean | string | LiquidChoice;
 
-const GROUP = { vessel: 'vessels', pump: 'pumps', controlValve: 'controlValves' } as const;
+const GROUP = {
+  vessel: 'vessels',
+  pump: 'pumps',
+  controlValve: 'controlValves',
+  boundary: 'boundaries',
+} as const;
 
 /** The field's override, or undefined when the case leaves it as the base. */
 export function overrideValue(o: CaseOverrides, f: OverrideField): OverrideValue | undefined {
@@ -58,7 +65,7 @@ export function overrideCount(o: CaseOverrides): number {
   if (o.liquid !== undefined) n++;
   if (o.temperature !== undefined) n++;
   if (o.atmosphericPressure !== undefined) n++;
-  for (const key of ['vessels', 'pumps', 'controlValves'] as const) {
+  for (const [key] of CASE_NODE_GROUPS) {
     for (const entry of Object.values(o[key] ?? {})) n += Object.keys(entry).length;
   }
   return n;
