@@ -49,5 +49,14 @@ export default ts.config(
       'no-restricted-globals': ['error', 'document', 'window', 'navigator', 'localStorage'],
     },
   },
-  { ignores: ['build/', '.svelte-kit/', 'node_modules/', 'test-results/', 'playwright-report/'] },
+  {
+    ignores: [
+      'build/',
+      'dist/',
+      '.svelte-kit/',
+      'node_modules/',
+      'test-results/',
+      'playwright-report/',
+    ],
+  },
 );
