@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { polylinePath } from '../../src/lib/chart/polylinePath';
+import { MAX_SKIPPED, polylinePath } from '../../src/lib/chart/polylinePath';
 
 /** Vertices of "Mx,yLx,y…" path data, one array per sub-path. */
 function vertices(d: string): Array<Array<[number, number]>> {
@@ -51,6 +51,24 @@ describe('polylinePath', () => {
     expect(polylinePath([], [])).toBe('');
   });
 
+  it('skipped vertices cannot drift past the tolerance on a slow curve', () => {
+    // A gentle arc: each point is within 0.05 of the chord to its next neighbour, but far
+    // from a chord across many of them.
+    const xs = Array.from({ length: 200 }, (_, k) => k);
+    const ys = xs.map((x) => 0.0004 * x * x);
+    const [poly] = vertices(polylinePath(xs, ys));
+    for (let k = 0; k < xs.length; k++)
+      expect(distanceTo(poly, [xs[k], ys[k]])).toBeLessThanOrEqual(0.05 + 1e-3);
+  });
+
+  it('one drawn segment skips at most MAX_SKIPPED collinear points', () => {
+    const xs = Array.from({ length: 1000 }, (_, k) => k);
+    const [poly] = vertices(polylinePath(xs, xs));
+    expect(poly.length).toBe(1 + Math.ceil(999 / (MAX_SKIPPED + 1)));
+    for (let k = 1; k < poly.length; k++)
+      expect(poly[k][0] - poly[k - 1][0]).toBeLessThanOrEqual(MAX_SKIPPED + 1);
+  });
+
   it('every input point lies on the drawn line within the tolerance (property)', () => {
     fc.assert(
       fc.property(
@@ -75,12 +93,14 @@ describe('polylinePath', () => {
               pts.map((p) => p[1]),
             ),
           );
-          // The skipped point was within 0.05 px of the segment at the time; rounding adds 1e-3.
-          for (const p of pts) expect(distanceTo(poly, p)).toBeLessThanOrEqual(0.051 + 1e-3);
+          // Every skipped point is within 0.05 px of the segment drawn; rounding adds 1e-3.
+          for (const p of pts) expect(distanceTo(poly, p)).toBeLessThanOrEqual(0.05 + 1e-3);
           expect(poly[0]).toEqual(pts[0]);
           expect(poly[poly.length - 1]).toEqual(pts[pts.length - 1]);
         },
       ),
+      // Fixed seed; FC_SEED and FC_RUNS run others (fast-check prints the seed on failure).
+      { seed: Number(process.env.FC_SEED ?? 13_2026), numRuns: Number(process.env.FC_RUNS ?? 300) },
     );
   });
 });

@@ -1,16 +1,22 @@
 /**
  * SVG path data for a polyline in screen coordinates, with the vertices that add nothing left
- * out: a vertex lying on the straight segment between the last vertex kept and the next one
- * (within `tolerance` pixels) is dropped. Along a pipe the profile's grade lines are straight
- * between stations, so a long route draws a few points per pipe instead of every station; a
- * dropped vertex was within `tolerance` of the segment that replaced it when it was dropped
- * (exactly collinear stations, the usual case, stay exactly on the line).
+ * out. A drawn segment runs from the last vertex kept to a later one only while every vertex
+ * it skips lies within `tolerance` pixels of it (checked against that segment, not only the
+ * segment in place when the vertex was first skipped, so small offsets cannot add up past the
+ * tolerance). Along a pipe the profile's grade lines are straight between stations, so a long
+ * route draws a few points per pipe instead of every station.
+ *
+ * The work is bounded: one segment skips at most MAX_SKIPPED vertices, so a run of n points
+ * costs at most n × MAX_SKIPPED distance checks.
  *
  * Points with a non-finite coordinate break the line, as d3's line().defined() does; a run of
  * one point is drawn as "Mx,yZ" (also as d3 does). Coordinates are written to 3 decimals.
  */
 
 const round = (v: number) => Math.round(v * 1000) / 1000;
+
+/** Most vertices one drawn segment may skip (bounds the checks per vertex). */
+export const MAX_SKIPPED = 64;
 
 /** Distance of (px, py) from the segment (ax, ay)–(bx, by) when it projects inside it, else ∞. */
 function offSegment(
@@ -28,6 +34,19 @@ function offSegment(
   const t = ((px - ax) * dx + (py - ay) * dy) / len2;
   if (t < 0 || t > 1) return Infinity; // a spike back along the line is kept
   return Math.abs(dx * (py - ay) - dy * (px - ax)) / Math.sqrt(len2);
+}
+
+/** Every vertex strictly between `from` and `to` lies within `tolerance` of that segment. */
+function skippable(
+  xs: ArrayLike<number>,
+  ys: ArrayLike<number>,
+  from: number,
+  to: number,
+  tolerance: number,
+): boolean {
+  for (let k = to - 1; k > from; k--)
+    if (offSegment(xs[from], ys[from], xs[to], ys[to], xs[k], ys[k]) > tolerance) return false;
+  return true;
 }
 
 /**
@@ -54,9 +73,7 @@ export function polylinePath(
     if (end === i) d += 'Z';
     let kept = i;
     for (let j = i + 1; j <= end; j++) {
-      const last = j === end;
-      if (!last && offSegment(xs[kept], ys[kept], xs[j + 1], ys[j + 1], xs[j], ys[j]) <= tolerance)
-        continue;
+      if (j < end && j - kept <= MAX_SKIPPED && skippable(xs, ys, kept, j + 1, tolerance)) continue;
       d += `L${round(xs[j])},${round(ys[j])}`;
       kept = j;
     }
