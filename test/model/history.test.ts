@@ -92,6 +92,51 @@ describe('History', () => {
     expect(h.inGesture).toBe(false);
   });
 
+  it("cancelling a gesture begun inside another keeps the outer gesture's work", () => {
+    const h = new History(sampleDocument());
+    const start = h.doc;
+    h.beginGesture();
+    h.apply(moveNodes(['V1'], 3, 3));
+    const outer = h.doc;
+    h.beginGesture();
+    h.apply(moveNodes(['P1'], 7, 7));
+    h.apply(renameDocument('inner'));
+    h.cancelGesture();
+    expect(h.inGesture).toBe(true);
+    expect(h.doc).toBe(outer);
+    h.apply(moveNodes(['V1'], 1, 1));
+    h.endGesture();
+    expect(h.inGesture).toBe(false);
+    expect(h.undoDepth).toBe(1);
+    expect(h.undoLabel).toBe('Move');
+    const done = h.doc;
+    expect(done.nodes.V1).toMatchObject({ x: start.nodes.V1.x + 4, y: start.nodes.V1.y + 4 });
+    expect(done.nodes.P1).toEqual(start.nodes.P1);
+    expect(done.name).toBe(start.name);
+    h.undo();
+    expect(h.doc).toEqual(start);
+    h.redo();
+    expect(h.doc).toEqual(done);
+  });
+
+  it('an inner gesture that ends joins the outer step; cancelling with nothing changed is quiet', () => {
+    const h = new History(sampleDocument());
+    const start = h.doc;
+    h.beginGesture();
+    h.beginGesture();
+    const revision = h.revision;
+    h.cancelGesture();
+    expect(h.revision).toBe(revision);
+    h.beginGesture();
+    h.apply(moveNodes(['P1'], 2, 2));
+    h.endGesture();
+    h.apply(moveNodes(['V1'], 2, 2));
+    h.endGesture();
+    expect(h.undoDepth).toBe(1);
+    h.undo();
+    expect(h.doc).toEqual(start);
+  });
+
   it('undo during a gesture ends it first', () => {
     const h = new History(sampleDocument());
     const start = h.doc;

@@ -1,7 +1,8 @@
 /**
  * Undo and redo over immer patches. Each step keeps the patches and inverse patches of one user
  * action; a gesture (a drag) squashes all its commands into one step, and a cancelled gesture
- * rolls back. Loading a document (`reset`) is not undoable: it clears both stacks.
+ * rolls back. Gestures nest: a gesture begun inside another is part of the outer one's step, and
+ * cancelling it rolls back only its own changes. Loading a document (`reset`) is not undoable: it clears both stacks.
  * `revision` grows with every change of `doc`, so results computed from a document can carry it.
  */
 import { applyPatches, freeze, type Patch } from 'immer';
@@ -15,11 +16,18 @@ export interface HistoryStep {
   inversePatches: Patch[];
 }
 
-interface Gesture {
-  depth: number;
-  start: HeadrouteDocument;
+/** Where a (possibly nested) gesture began: the document then and how many changes it had. */
+interface GestureMark {
+  doc: HeadrouteDocument;
+  changes: number;
   label: string;
-  patches: Patch[];
+}
+
+interface Gesture {
+  /** One mark per open level, outermost first. */
+  marks: GestureMark[];
+  label: string;
+  patches: Patch[][];
   inverse: Patch[][];
 }
 
@@ -101,7 +109,7 @@ export class History {
     if (this.#gesture) {
       const g = this.#gesture;
       if (g.patches.length === 0) g.label = command.label;
-      g.patches.push(...result.patches);
+      g.patches.push(result.patches);
       g.inverse.push(result.inversePatches);
     } else {
       this.#push({
@@ -114,32 +122,53 @@ export class History {
     return { ok: true, created: result.created };
   }
 
-  /** Start a gesture: commands until `endGesture` become one undo step. Nests by counting. */
+  /**
+   * Start a gesture: commands until `endGesture` become one undo step. Nests: an inner gesture
+   * joins the outer one's step when it ends, and `cancelGesture` undoes only the inner one.
+   */
   beginGesture(): void {
-    if (this.#gesture) {
-      this.#gesture.depth++;
+    const g = this.#gesture;
+    if (g) {
+      g.marks.push({ doc: this.#doc, changes: g.patches.length, label: g.label });
       return;
     }
-    this.#gesture = { depth: 1, start: this.#doc, label: '', patches: [], inverse: [] };
+    this.#gesture = {
+      marks: [{ doc: this.#doc, changes: 0, label: '' }],
+      label: '',
+      patches: [],
+      inverse: [],
+    };
   }
 
-  /** End a gesture, pushing its commands as one undo step (none if nothing changed). */
+  /**
+   * End the innermost gesture. The outermost pushes its commands as one undo step (none if
+   * nothing changed).
+   */
   endGesture(): void {
     const g = this.#gesture;
     if (!g) return;
-    if (--g.depth > 0) return;
+    g.marks.pop();
+    if (g.marks.length > 0) return;
     this.#gesture = null;
     if (g.patches.length === 0) return;
     const inversePatches = g.inverse.reverse().flat();
-    this.#push({ label: g.label, patches: g.patches, inversePatches });
+    this.#push({ label: g.label, patches: g.patches.flat(), inversePatches });
   }
 
-  /** Abandon a gesture: the document returns to how it was when the gesture began. */
+  /**
+   * Abandon the innermost gesture: the document returns to how it was when that gesture began.
+   * An outer gesture stays open with its own changes.
+   */
   cancelGesture(): void {
     const g = this.#gesture;
-    if (!g) return;
-    this.#gesture = null;
-    if (g.patches.length > 0) this.#set(g.start);
+    const mark = g?.marks.pop();
+    if (!g || !mark) return;
+    const changed = g.patches.length > mark.changes;
+    g.patches.length = mark.changes;
+    g.inverse.length = mark.changes;
+    g.label = mark.label;
+    if (g.marks.length === 0) this.#gesture = null;
+    if (changed) this.#set(mark.doc);
   }
 
   /** True while a gesture is open. */
@@ -168,7 +197,7 @@ export class History {
   }
 
   #closeGesture() {
-    if (this.#gesture) this.#gesture.depth = 1;
+    if (this.#gesture) this.#gesture.marks.length = 1;
     this.endGesture();
   }
 
