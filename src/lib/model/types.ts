@@ -6,32 +6,14 @@
  * atmospheric pressure). Plan positions (x, y) are sheet units and never enter the physics.
  */
 
+import type { FittingType, LossMethod } from '../physics/fittings/fittingTypes';
+import type { LiquidChoice, UserLiquidRow } from '../physics/liquids/liquidChoice';
+
 /** Identifier of a node, pipe, case or route; unique within its document */
 export type Id = string;
 
-/** Liquid chosen for the project: one from the library, or defined by the user. */
-export type LiquidChoice =
-  | { kind: 'library'; id: string }
-  | {
-      kind: 'user';
-      name: string;
-      /** Property table against temperature, interpolated linearly; one row means constant values. */
-      table: UserLiquidRow[];
-      /** Critical pressure, Pa abs, for the control-valve FF factor; optional. */
-      criticalPressure?: number;
-    };
-
-/** One row of a user-defined liquid's property table. */
-export interface UserLiquidRow {
-  /** Temperature, K. */
-  temperature: number;
-  /** Density, kg/m³. */
-  density: number;
-  /** Dynamic viscosity, Pa·s. */
-  viscosity: number;
-  /** Vapour pressure, Pa abs. */
-  vapourPressure: number;
-}
+/** The liquid choice and fitting types belong to physics; the document re-exports them. */
+export type { FittingType, LiquidChoice, LossMethod, UserLiquidRow };
 
 /** A connection end: a node and one of its ports. */
 export interface PortRef {
@@ -110,28 +92,6 @@ export interface Pump extends NodeBase {
   dutyFlow: number;
 }
 
-/** Fitting types known to the loss library. */
-export type FittingType =
-  | 'elbow-90-standard'
-  | 'elbow-90-long-radius'
-  | 'elbow-45-standard'
-  | 'elbow-45-long-radius'
-  | 'tee-run'
-  | 'tee-branch'
-  | 'gate-valve'
-  | 'globe-valve'
-  | 'ball-valve'
-  | 'butterfly-valve'
-  | 'swing-check-valve'
-  | 'lift-check-valve'
-  | 'strainer'
-  | 'flow-meter'
-  | 'reducer'
-  | 'expander'
-  | 'restriction-orifice';
-
-/** How a fitting's loss coefficient is found. */
-export type LossMethod = 'fixed' | '2K' | '3K';
 
 /**
  * An inline fitting, manual valve, check valve, strainer, meter, reducer/expander or

@@ -12,7 +12,7 @@
  *   make: screen, meter principle); the user's fixed K is used.
  */
 
-import type { FittingType, LossMethod } from '../../model/types';
+import type { FittingType, LossMethod } from './fittingTypes';
 import { LAMINAR_REYNOLDS_FLOOR } from '../friction';
 import { HOOPER_2K, hooper2K } from './twoK';
 import { DARBY_3K, darby3K } from './threeK';

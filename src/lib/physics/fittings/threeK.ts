@@ -11,7 +11,7 @@
  * table (the open-source `fluids` library, fittings module).
  */
 
-import type { FittingType } from '../../model/types';
+import type { FittingType } from './fittingTypes';
 import { METRES_PER_INCH } from './twoK';
 
 /** Darby's three constants for one fitting. */

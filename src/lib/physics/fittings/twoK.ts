@@ -8,7 +8,7 @@
  * public transcription of the table (the open-source `fluids` library, fittings module).
  */
 
-import type { FittingType } from '../../model/types';
+import type { FittingType } from './fittingTypes';
 
 /** Hooper's two constants for one fitting. */
 export interface HooperCoefficients {

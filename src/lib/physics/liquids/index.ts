@@ -4,7 +4,7 @@
  *
  * SI throughout: K, kg/m³, Pa·s, Pa abs.
  */
-import type { LiquidChoice } from '../../model/types';
+import type { LiquidChoice } from './liquidChoice';
 import { waterDensity, waterSaturationPressure, waterViscosity } from '../water';
 import { evaluateCorrelation, inRange, type TemperatureRange } from './correlations';
 import { findLibraryLiquid } from './library';

@@ -17,7 +17,7 @@
  * rows are sorted by temperature and, of rows with equal temperatures, the first one listed is
  * used. `validateUserLiquid` reports each of these problems so the user can fix them.
  */
-import type { LiquidChoice, UserLiquidRow } from '../../model/types';
+import type { LiquidChoice, UserLiquidRow } from './liquidChoice';
 import type { LiquidProperty } from './libraryTypes';
 
 /** A user-defined liquid choice. */
