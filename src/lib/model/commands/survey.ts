@@ -1,0 +1,212 @@
+/**
+ * Importing a surveyed profile onto a pipe, or onto the run of pipes through waypoints that the
+ * pipe belongs to: the run's pipes and interior waypoints give way to one waypoint for each
+ * surveyed point kept by the thinning (every high and low point exactly) and one pipe between
+ * each two, whose length is the developed length of the survey between them.
+ */
+import { createNode, createPipe } from '../defaults';
+import { MAX_ELEMENTS } from '../file/limits';
+import { NodeSchema, PipeSchema } from '../file/schema';
+import { ID_PREFIX, idInUse, nextId } from '../ids';
+import { CASE_NODE_GROUPS } from '../caseTargets';
+import { portPosition } from '../ports';
+import { simplifyProfile } from '../survey/simplifyProfile';
+import type { SurveyPoint } from '../survey/parseSurvey';
+import type { HeadrouteDocument, Id, Pipe, PortRef, SheetNode } from '../types';
+import type { Command } from './command';
+import { assignPatch, plain, validateRecord } from './check';
+import { commandErrors } from './errors';
+
+/** The run of pipes a pipe belongs to: pipes joined end to end through plain waypoints. */
+export interface PipeRun {
+  /** Where the run starts and ends (ports of nodes that are not pass-through waypoints). */
+  start: PortRef;
+  end: PortRef;
+  /** The run's pipes, from start to end. */
+  pipes: Id[];
+  /** The waypoints between them, from start to end. */
+  waypoints: Id[];
+}
+
+/** Pipes on each node, for walking runs. */
+function pipesByNode(doc: HeadrouteDocument): Map<Id, Id[]> {
+  const map = new Map<Id, Id[]>();
+  for (const pipe of Object.values(doc.pipes)) {
+    for (const node of [pipe.from.node, pipe.to.node]) {
+      const list = map.get(node);
+      if (list) list.push(pipe.id);
+      else map.set(node, [pipe.id]);
+    }
+  }
+  return map;
+}
+
+/**
+ * The run through `pipeId`: walked from the pipe's `from` end back and its `to` end forward
+ * through waypoints that carry exactly two pipes. Null when the walk closes on itself (a ring
+ * of waypoints with no other part on it).
+ */
+export function pipeRun(doc: HeadrouteDocument, pipeId: Id): PipeRun | null {
+  const byNode = pipesByNode(doc);
+  const walk = (
+    first: Id,
+    from: PortRef,
+  ): { pipes: Id[]; waypoints: Id[]; end: PortRef } | null => {
+    const pipes: Id[] = [];
+    const waypoints: Id[] = [];
+    let pipe = doc.pipes[first];
+    let at = from; // the far end of `pipe`, seen from where the walk came
+    for (;;) {
+      const node = doc.nodes[at.node];
+      const on = byNode.get(at.node) ?? [];
+      if (node?.kind !== 'waypoint' || on.length !== 2) return { pipes, waypoints, end: at };
+      const next = on[0] === pipe.id ? on[1] : on[0];
+      if (next === first || pipes.includes(next)) return null;
+      waypoints.push(at.node);
+      pipes.push(next);
+      pipe = doc.pipes[next];
+      at = pipe.from.node === at.node ? pipe.to : pipe.from;
+    }
+  };
+  const pipe = doc.pipes[pipeId];
+  const back = walk(pipeId, pipe.from);
+  const ahead = walk(pipeId, pipe.to);
+  if (!back || !ahead) return null;
+  return {
+    start: back.end,
+    end: ahead.end,
+    pipes: [...back.pipes.reverse(), pipeId, ...ahead.pipes],
+    waypoints: [...back.waypoints.reverse(), ...ahead.waypoints],
+  };
+}
+
+/** Hands out fresh ids for one prefix: one scan of the document, then counting up. */
+function idCounter(doc: HeadrouteDocument, prefix: string): () => Id {
+  const first = nextId(doc, prefix);
+  let n = Number(first.slice(prefix.length));
+  return () => {
+    let id = `${prefix}${n++}`;
+    while (idInUse(doc, id)) id = `${prefix}${n++}`;
+    return id;
+  };
+}
+
+/** Developed (slope) length of the survey between points a and b, m. */
+function developedLength(points: readonly SurveyPoint[], a: number, b: number): number {
+  let length = 0;
+  for (let k = a; k < b; k++) {
+    length += Math.hypot(
+      points[k + 1].chainage - points[k].chainage,
+      points[k + 1].elevation - points[k].elevation,
+    );
+  }
+  return length;
+}
+
+/** Pipe fields that stay with each new piece (everything but identity, ends and length). */
+function pipeTemplate(pipe: Pipe): Record<string, unknown> {
+  const { id: _id, name: _name, from: _from, to: _to, length: _length, ...rest } = plain(pipe);
+  return structuredClone(rest) as Record<string, unknown>;
+}
+
+/**
+ * Lay a surveyed profile onto the run of `pipeId` (see `pipeRun`). `points` start at chainage 0
+ * at the run's start; they are thinned by `simplifyProfile` with `tolerance` metres. The run's
+ * end parts keep their own elevations. The first new pipe keeps `pipeId` and its name; each
+ * pipe takes the selected pipe's bore, material, roughness and design pressure.
+ */
+export function importSurvey(
+  pipeId: Id,
+  points: readonly SurveyPoint[],
+  tolerance: number,
+): Command {
+  const command: Command = {
+    label: 'Import surveyed profile',
+    run(draft) {
+      command.created = [];
+      if (!Object.hasOwn(draft.pipes, pipeId)) return commandErrors.pipeMissing(pipeId);
+      if (points.length < 2)
+        return commandErrors.invalid(pipeId, 'A survey needs at least two points.');
+      if (!(tolerance >= 0) || !Number.isFinite(tolerance)) {
+        return commandErrors.invalid(pipeId, 'The thinning tolerance must be zero or more metres.');
+      }
+      const doc = draft as unknown as HeadrouteDocument;
+      const run = pipeRun(doc, pipeId);
+      if (!run) {
+        return commandErrors.invalid(
+          pipeId,
+          'This pipe lies on a ring of waypoints with no other part; a survey needs a start and an end.',
+        );
+      }
+      const kept = simplifyProfile(points, tolerance);
+      const interior = kept.length - 2;
+      const count = Object.keys(draft.nodes).length + Object.keys(draft.pipes).length;
+      const after = count - run.pipes.length - run.waypoints.length + interior * 2 + 1;
+      if (after > MAX_ELEMENTS) return commandErrors.tooMany('elements', MAX_ELEMENTS);
+
+      const template = pipeTemplate(draft.pipes[pipeId]);
+      const name = draft.pipes[pipeId].name;
+      const removed = new Set(run.waypoints);
+      for (const id of run.pipes) delete draft.pipes[id];
+      for (const id of run.waypoints) delete draft.nodes[id];
+      for (const [routeId, route] of Object.entries(draft.routes)) {
+        if (!route.nodes.some((n) => removed.has(n))) continue;
+        const left = route.nodes.filter((n) => !removed.has(n));
+        if (left.length < 2) delete draft.routes[routeId];
+        else route.nodes = left;
+      }
+      for (const c of Object.values(draft.cases)) {
+        for (const [field] of CASE_NODE_GROUPS) {
+          const map = c.overrides[field];
+          if (map) for (const id of removed) if (Object.hasOwn(map, id)) delete map[id];
+        }
+      }
+
+      const a = portPosition(plain(draft.nodes[run.start.node]) as SheetNode, run.start.port);
+      const b = portPosition(plain(draft.nodes[run.end.node]) as SheetNode, run.end.port);
+      const total = points[points.length - 1].chainage;
+      const created: Id[] = [];
+      const waypointId = idCounter(doc, ID_PREFIX.waypoint);
+      const pipeIdNext = idCounter(doc, ID_PREFIX.pipe);
+      let from: PortRef = run.start;
+      for (let k = 1; k < kept.length; k++) {
+        const last = k === kept.length - 1;
+        let to: PortRef = run.end;
+        if (!last) {
+          const p = points[kept[k]];
+          const t = p.chainage / total;
+          const id = waypointId();
+          const node = createNode(
+            'waypoint',
+            { x: a.x + (b.x - a.x) * t, y: a.y + (b.y - a.y) * t },
+            id,
+            draft.settings.unitSystem,
+          ) as unknown as Record<string, unknown>;
+          node.z = p.elevation;
+          const invalid = validateRecord(NodeSchema, node, id);
+          if (invalid) return invalid;
+          draft.nodes[id] = node as unknown as SheetNode;
+          created.push(id);
+          to = { node: id, port: 'in' };
+        }
+        const id = k === 1 ? pipeId : pipeIdNext();
+        const pipe = createPipe(from, to, id, draft.settings.unitSystem) as unknown as Record<
+          string,
+          unknown
+        >;
+        assignPatch(pipe, {
+          ...structuredClone(template),
+          name: k === 1 ? name : id,
+          length: developedLength(points, kept[k - 1], kept[k]),
+        });
+        const invalid = validateRecord(PipeSchema, pipe, id);
+        if (invalid) return invalid;
+        draft.pipes[id] = pipe as unknown as Pipe;
+        if (k !== 1) created.push(id);
+        if (!last) from = { node: to.node, port: 'out' };
+      }
+      command.created = created;
+    },
+  };
+  return command;
+}
