@@ -118,7 +118,7 @@ export function parseSurveyCsv(text: string, unit: SurveyUnit = 'auto'): SurveyP
       message: 'A survey needs at least two points (chainage, elevation).',
     };
   }
-  const chosen = unit === 'auto' ? ((header && headerUnit(header)) ?? 'm') : unit;
+  const chosen = unit === 'auto' ? ((header === null ? null : headerUnit(header)) ?? 'm') : unit;
   const scale = chosen === 'ft' ? FOOT : 1;
   const origin = raw[0].chainage;
   const points = raw.map((p) => ({
