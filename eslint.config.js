@@ -96,8 +96,10 @@ export default ts.config(
   {
     ignores: [
       'build/',
+      'build-test/',
       'dist/',
       '.svelte-kit/',
+      '.svelte-kit-test/',
       'node_modules/',
       'test-results/',
       'playwright-report/',

@@ -3,7 +3,10 @@ import { findChromium } from './scripts/browser-path.js';
 
 // E2E_PORT lets several people run the browser tests at once; E2E_DEV=1 serves with
 // `vite dev` instead of the built app (faster while working, no shared build folder).
-const port = Number(process.env.E2E_PORT ?? 4173);
+// The default port is not `npm start`'s 4173, so the tests can run while the app is served;
+// `npm run test:browser` also builds into folders of its own (HEADROUTE_TEST_BUILD, see
+// svelte.config.js).
+const port = Number(process.env.E2E_PORT ?? 4183);
 const server = process.env.E2E_DEV
   ? `npx vite dev --port ${port} --strictPort --host 127.0.0.1`
   : `npx vite preview --port ${port} --strictPort --host 127.0.0.1`;
