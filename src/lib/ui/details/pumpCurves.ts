@@ -4,7 +4,13 @@
  * with the pump on duty at that flow), and the operating point. Pure functions.
  */
 import type { HeadrouteDocument, Id, Pump } from '../../model/types';
-import { fitCurve, pumpHead } from '../../physics/pump';
+import {
+  fitCurve,
+  pumpEfficiency,
+  pumpHead,
+  pumpNpshRequired,
+  type PumpCurveKind,
+} from '../../physics/pump';
 import type { SolveResult } from '../../solver/types';
 
 export interface FlowHead {
@@ -65,4 +71,81 @@ export function systemCurve(
     }
   }
   return out;
+}
+
+/** A point of any pump curve: flow, m³/s, and its value (m, or a fraction for efficiency). */
+export interface FlowValue {
+  flow: number;
+  value: number;
+}
+
+/** A pump curve at running speed, split where it leaves the given points. */
+export interface CurveSeries {
+  /** Below the first given point: the fit extrapolated towards zero flow (drawn dashed). */
+  before: FlowValue[];
+  /** From the first to the last given point (scaled to running speed). */
+  within: FlowValue[];
+  /** Beyond the last given point: the fit extrapolated (drawn dashed and labelled). */
+  beyond: FlowValue[];
+  /** The given points at running speed (affinity laws), as the fit sees them. */
+  points: FlowValue[];
+  /** Last given flow at running speed, m³/s; null when the curve has no points. */
+  lastFlow: number | null;
+}
+
+const CURVE_POINTS = {
+  head: 'headCurve',
+  npshr: 'npshrCurve',
+  efficiency: 'efficiencyCurve',
+} as const;
+
+/**
+ * One of the pump's curves (head, NPSHr or efficiency) at running speed over `flows`, split
+ * at the last given point. Affinity laws as in the solver: Q ∝ N, H and NPSHr ∝ N², efficiency
+ * unchanged at corresponding points.
+ */
+export function curveSeries(pump: Pump, kind: PumpCurveKind, flows: number[]): CurveSeries {
+  const given = pump[CURVE_POINTS[kind]];
+  const fit = fitCurve(given);
+  const empty: CurveSeries = { before: [], within: [], beyond: [], points: [], lastFlow: null };
+  if (fit.form === 'empty' || fit.flowRange === null) return empty;
+  const s = pump.ratedSpeed > 0 ? pump.speed / pump.ratedSpeed : 1;
+  if (!(s > 0)) return empty;
+  const at = (flow: number) =>
+    kind === 'head'
+      ? pumpHead(fit, flow, s)
+      : kind === 'npshr'
+        ? pumpNpshRequired(fit, flow, s)
+        : pumpEfficiency(fit, flow, s);
+  const valueScale = kind === 'efficiency' ? 1 : s * s;
+  const firstFlow = fit.flowRange.min * s;
+  const lastFlow = fit.flowRange.max * s;
+  const usable = (v: number) => Number.isFinite(v) && v >= 0;
+  const before: FlowValue[] = [];
+  const within: FlowValue[] = [];
+  const beyond: FlowValue[] = [];
+  for (const flow of flows) {
+    const value = at(flow);
+    if (!usable(value)) continue;
+    if (flow < firstFlow) before.push({ flow, value });
+    else if (flow <= lastFlow) within.push({ flow, value });
+    else beyond.push({ flow, value });
+  }
+  // The pieces meet at the first and last given flows, so solid and dashed lines join.
+  const first = at(firstFlow);
+  if (usable(first)) {
+    if (within.length === 0 || within[0].flow > firstFlow)
+      within.unshift({ flow: firstFlow, value: first });
+    if (before.length > 0) before.push({ flow: firstFlow, value: first });
+  }
+  const last = at(lastFlow);
+  if (usable(last)) {
+    if (within.length === 0 || within[within.length - 1].flow < lastFlow)
+      within.push({ flow: lastFlow, value: last });
+    if (beyond.length > 0) beyond.unshift({ flow: lastFlow, value: last });
+  }
+  const points = given
+    .filter((p) => Number.isFinite(p.flow) && Number.isFinite(p.value))
+    .map((p) => ({ flow: p.flow * s, value: p.value * valueScale }));
+  return { before, within, beyond, points, lastFlow };
 }
