@@ -34,21 +34,25 @@ export interface ElementResults {
 
 /** The same results by position, for the findings: pipes as graph.pipeList, nodes as graph.sheetNodes. */
 export interface IndexedResults {
-  pipes: PipeResult[];
+  /** Undefined for a pipe whose heads the solve did not determine. */
+  pipes: Array<PipeResult | undefined>;
   /** Undefined for a sheet node left out of the solve. */
   nodes: Array<NodeResult | undefined>;
 }
 
-function clean(value: number): number {
-  return Number.isFinite(value) ? value : 0;
-}
-
-/** Builds every element's results; all numbers are finite. */
+/**
+ * Builds the results of every element whose heads the solve determined: `known` marks the graph
+ * nodes with a determined head (by default those at the ends of active links). A pipe needs
+ * both ends known; a node gets the ports that are known (none: no result); a pump or a control
+ * valve needs both. Values are the raw numbers of the solve: nothing non-finite is replaced here
+ * (solve() reports it, see findings/nonFinite.ts).
+ */
 export function elementResults(
   graph: HydraulicGraph,
   outcome: GgaOutcome,
   activeLink: Uint8Array,
   fluid: SolveFluid,
+  known: Uint8Array = knownFromLinks(graph, activeLink),
 ): { records: ElementResults; indexed: IndexedResults } {
   const g2 = 2 * GRAVITY;
   const rhoG = fluid.density * GRAVITY;
@@ -57,7 +61,7 @@ export function elementResults(
   const pipes: Record<Id, PipeResult> = {};
   const pipeList = graph.pipeList;
   const nPipes = pipeList.length;
-  const pipeResults: PipeResult[] = new Array<PipeResult>(nPipes);
+  const pipeResults = new Array<PipeResult | undefined>(nPipes);
   /** Each pipe's result flow, speed and end total heads, for the ports on it. */
   const pipeFlow = new Float64Array(nPipes);
   const pipeSpeed = new Float64Array(nPipes);
@@ -67,6 +71,8 @@ export function elementResults(
   for (let p = 0; p < nPipes; p++) {
     const gp = pipeList[p];
     const k = gp.link;
+    const link = graph.links[k];
+    if (!known[link.from] || !known[link.to]) continue;
     const active = activeLink[k] === 1;
     const q = active ? flows[k] : 0;
     const law = gp.law;
@@ -80,29 +86,28 @@ export function elementResults(
     if (active) {
       // EGL at a pipe's end: the graph head, or at a vessel/boundary the fixed head less the
       // entrance loss (liquid leaving it) or plus the exit loss (liquid arriving).
-      const link = graph.links[k];
       totalFrom = heads[link.from];
       if (fixed[link.from]) totalFrom += q >= 0 ? -gp.entranceFrom * vh : gp.exitFrom * vh;
       totalTo = heads[link.to];
       if (fixed[link.to]) totalTo += q <= 0 ? -gp.entranceTo * vh : gp.exitTo * vh;
     }
     const result: PipeResult = {
-      flow: clean(q),
-      velocity: clean(v),
-      reynolds: clean(re),
+      flow: q,
+      velocity: v,
+      reynolds: re,
       regime: noFlow
         ? 'no-flow'
         : re <= LAMINAR_LIMIT_REYNOLDS
           ? 'laminar'
           : (friction?.regime ?? 'laminar'),
-      frictionFactor: clean(friction?.factor ?? 0),
-      frictionLoss: clean(Math.abs(law.friction(q))),
-      endLosses: clean(Math.abs(law.endLoss(q))),
+      frictionFactor: friction?.factor ?? 0,
+      frictionLoss: Math.abs(law.friction(q)),
+      endLosses: Math.abs(law.endLoss(q)),
       innerDiameter: law.diameter,
-      headFrom: clean(totalFrom - vh),
-      headTo: clean(totalTo - vh),
-      totalHeadFrom: clean(totalFrom),
-      totalHeadTo: clean(totalTo),
+      headFrom: totalFrom - vh,
+      headTo: totalTo - vh,
+      totalHeadFrom: totalFrom,
+      totalHeadTo: totalTo,
       elevationFrom: gp.elevationFrom,
       elevationTo: gp.elevationTo,
     };
@@ -124,6 +129,7 @@ export function elementResults(
     let best = -1;
     for (let e = portPipeStart[slot]; e < portPipeStart[slot + 1]; e++) {
       const p = portPipeList[e];
+      if (!pipeResults[p]) continue;
       if (best < 0) best = p;
       else {
         const q = Math.abs(pipeFlow[p]);
@@ -140,11 +146,11 @@ export function elementResults(
     const head = total - (velocity * velocity) / g2;
     const pressureGauge = rhoG * (head - elevation);
     return {
-      head: clean(head),
-      totalHead: clean(total),
-      pressureAbs: clean(pressureGauge + fluid.atmosphericPressure),
-      pressureGauge: clean(pressureGauge),
-      velocity: clean(velocity),
+      head: head,
+      totalHead: total,
+      pressureAbs: pressureGauge + fluid.atmosphericPressure,
+      pressureGauge: pressureGauge,
+      velocity: velocity,
       elevation,
     };
   };
@@ -161,20 +167,26 @@ export function elementResults(
     const ports: Record<string, PortResult> = {};
     const start = graph.portStart[i];
     const count = graph.portStart[i + 1] - start;
+    let shown = 0;
     for (let local = 0; local < count; local++) {
       // A repeated nozzle id names its first nozzle, whose pipes are its pipes.
       const at = node.kind === 'vessel' ? portIndex(node, portName(node, local)) : local;
+      const graphNode = portNode[start + at];
+      if (graphNode < 0 || !known[graphNode]) continue;
       ports[portName(node, local)] = portResult(node, start + at, at);
+      shown++;
     }
+    if (shown === 0 && count > 0) continue;
     const result: NodeResult = { ports };
     const k = graph.nodeLink[i];
-    if (k >= 0) {
+    if (k >= 0 && known[graph.links[k].from] && known[graph.links[k].to]) {
       const link = graph.links[k];
+      // An inactive link between known ends is shut: no flow.
       const q = activeLink[k] ? flows[k] : 0;
-      result.flow = clean(q);
-      result.headLoss = activeLink[k] ? clean(heads[link.from] - heads[link.to]) : 0;
+      result.flow = q;
+      result.headLoss = heads[link.from] - heads[link.to];
       if (link.info?.kind === 'fitting' && link.info.law)
-        result.lossCoefficient = clean(link.info.law.lossCoefficient);
+        result.lossCoefficient = link.info.law.lossCoefficient;
       if (link.info?.kind === 'pump') {
         const [suction, discharge] = [ports.suction, ports.discharge];
         pumps[graph.nodeIds[i]] = pumpResult(link.info, q, suction, discharge, fluid);
@@ -189,11 +201,11 @@ export function elementResults(
           fluid.criticalPressure,
         );
         controlValves[graph.nodeIds[i]] = {
-          flow: clean(q),
-          pressureDrop: clean(dp),
+          flow: q,
+          pressureDrop: dp,
           opening: node.opening,
-          kv: clean(link.info.kv),
-          chokedPressureDrop: clean(dpChoked),
+          kv: link.info.kv,
+          chokedPressureDrop: dpChoked,
           choked:
             !link.info.closed &&
             Math.abs(q) > 0 &&
@@ -209,6 +221,16 @@ export function elementResults(
     records: { pipes, nodes, pumps, controlValves },
     indexed: { pipes: pipeResults, nodes: nodeResults },
   };
+}
+
+/** Graph nodes at an end of an active link, or fixed. */
+function knownFromLinks(graph: HydraulicGraph, activeLink: Uint8Array): Uint8Array {
+  const known = new Uint8Array(graph.nodeCount);
+  for (let i = 0; i < graph.nodeCount; i++) if (graph.fixed[i]) known[i] = 1;
+  graph.links.forEach((link, k) => {
+    if (activeLink[k]) known[link.from] = known[link.to] = 1;
+  });
+  return known;
 }
 
 function pumpResult(
@@ -236,19 +258,19 @@ function pumpResult(
   // then far from its best-efficiency flow and gets a pump-off-bep finding).
   const efficiency =
     info.running && info.efficiencyFit.form !== 'empty'
-      ? Math.max(clean(pumpEfficiency(info.efficiencyFit, q, s)), EFFICIENCY_FLOOR)
+      ? Math.max(pumpEfficiency(info.efficiencyFit, q, s), EFFICIENCY_FLOOR)
       : 0;
   const power = efficiency > 0 ? shaftPower(fluid.density, q, head, efficiency) : 0;
   const bep = info.running ? bestEfficiencyFlow(info.efficiencyFit, s) : null;
   return {
-    flow: clean(flow),
-    head: clean(head),
-    npshAvailable: clean(npshAvailable),
-    npshRequired: clean(npshRequired),
-    npshMargin: clean(npshAvailable - npshRequired),
-    npshRatio: npshRequired > 0 ? clean(npshAvailable / npshRequired) : 0,
+    flow: flow,
+    head: head,
+    npshAvailable: npshAvailable,
+    npshRequired: npshRequired,
+    npshMargin: npshAvailable - npshRequired,
+    npshRatio: npshRequired > 0 ? npshAvailable / npshRequired : 0,
     efficiency,
-    shaftPower: clean(power),
-    bepFraction: bep !== null && bep > 0 ? clean(q / bep) : 0,
+    shaftPower: power,
+    bepFraction: bep !== null && bep > 0 ? q / bep : 0,
   };
 }

@@ -22,6 +22,8 @@ export const FINDING_LEVELS = {
   'above-design-pressure': 'stop',
   'pump-curve-missing': 'stop',
   'nozzle-above-level': 'stop',
+  'forced-flow': 'stop',
+  'non-finite-result': 'stop',
   'unconnected-port': 'caution',
   'npsh-margin-low': 'caution',
   vacuum: 'caution',
@@ -36,6 +38,7 @@ export const FINDING_LEVELS = {
   'reversed-flow': 'note',
   'non-return-closed': 'note',
   'npshr-curve-missing': 'note',
+  'blocked-in': 'note',
 } as const satisfies Record<string, FindingLevel>;
 
 /** A stable finding code. */
@@ -70,6 +73,12 @@ function at(u: MessageUnits, chainage?: number): string {
     : '';
 }
 
+/** A flow in the message units, or in m³/s where it would round to nothing there. */
+function smallFlow(u: MessageUnits, q: number): string {
+  const shown = u.flow(q);
+  return /^0\.0 /.test(shown) ? `${q.toExponential(1)} m³/s` : shown;
+}
+
 function fixed(value: number, digits: number): string {
   return Number.isFinite(value) ? value.toFixed(digits) : '–';
 }
@@ -91,6 +100,43 @@ export function findingsIn(system: UnitSystem) {
       finding(
         'cut-off',
         `${list(names)} ${names.length === 1 ? 'is' : 'are'} not connected to any vessel or boundary, so ${names.length === 1 ? 'its' : 'their'} pressures cannot be found; connect them or remove them.`,
+        elements,
+      ),
+    /**
+     * A fixed flow (duty pump, supply, draw-off) forced into (`flow` > 0) or out of a part that
+     * reaches no fixed head except through shut elements (`blockers`) or capped ends.
+     */
+    forcedFlow: (
+      sources: string[],
+      blockers: string[],
+      inside: string[],
+      flow: number,
+      elements: Id[],
+    ) =>
+      finding(
+        'forced-flow',
+        `${list(sources)} ${sources.length === 1 ? 'forces' : 'force'} ${smallFlow(u, Math.abs(flow))} ${flow > 0 ? 'into' : 'out of'} ${inside.length ? list(inside) : 'a line'}, which has no way ${flow > 0 ? 'out' : 'in'} but through ${blockers.length ? `${list(blockers)}, shut, stopped or non-return against it` : 'a capped end'}: no steady flow is possible, so that part is not solved. To solve it, ${blockers.length ? `open ${list(blockers)} (or turn a non-return element round), ` : ''}connect the line to a vessel or a boundary that holds a pressure, or stop the forcing element (a pump on its curve instead of a duty flow, a boundary holding a pressure instead of a flow).`,
+        elements,
+      ),
+    /** Parts shut in behind shut or non-return elements: their pressure is not determined. */
+    blockedIn: (names: string[], blockers: string[], elements: Id[]) =>
+      finding(
+        'blocked-in',
+        `${list(names)} ${names.length === 1 ? 'is' : 'are'} shut in behind ${list(blockers)} with no flow: ${names.length === 1 ? 'its' : 'their'} pressure is not determined by the sheet, so none is shown and ${names.length === 1 ? 'it is' : 'they are'} left out of the checks.`,
+        elements,
+      ),
+    /** A result that came out as NaN or ±Infinity, with the input that drove it. */
+    nonFiniteResult: (name: string, cause: string, elements: Id[]) =>
+      finding(
+        'non-finite-result',
+        `${q(name)}: its results are not finite numbers (${cause}), so none are shown; check that input.`,
+        elements,
+      ),
+    /** A solve whose node balance misses its tolerance (the heads may have settled). */
+    unbalanced: (imbalance: number, tolerance: number, names: string[], elements: Id[]) =>
+      finding(
+        'no-convergence',
+        `The network solve did not balance: the flows into and out of ${names.length ? list(names, 3) : 'a node'} differ by ${Number.isFinite(imbalance) ? imbalance.toExponential(1) : 'a value that is not a number'} m³/s, more than the tolerance of ${tolerance.toExponential(1)} m³/s; the figures shown are not a solution.`,
         elements,
       ),
     brokenConnection: (pipeName: string, end: 'from' | 'to', node: string, port: string, id: Id) =>

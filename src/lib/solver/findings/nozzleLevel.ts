@@ -29,7 +29,7 @@ export function nozzleLevelFindings(
         const p = portPipeList[e];
         const gp = pipeList[p];
         const r = indexed.pipes[p];
-        if (gp.fromSlot === gp.toSlot || Math.abs(r.velocity) < NO_FLOW_VELOCITY) continue;
+        if (!r || gp.fromSlot === gp.toSlot || Math.abs(r.velocity) < NO_FLOW_VELOCITY) continue;
         // Positive flow runs from → to: it leaves the vessel where the pipe starts on it.
         const leaving = gp.fromSlot === slot ? r.flow > 0 : r.flow < 0;
         if (!leaving) continue;

@@ -51,7 +51,7 @@ export function pipeService(graph: HydraulicGraph, indexed: IndexedResults): Uin
       seen[p] = stamp;
       chain[length++] = p;
       const gp = pipeList[p];
-      const forward = indexed.pipes[p].flow >= 0;
+      const forward = (indexed.pipes[p]?.flow ?? 0) >= 0;
       const slot = (direction === 1) === forward ? gp.toSlot : gp.fromSlot;
       const owner = slotOwner[slot];
       const kind = sheetNodes[owner].kind;

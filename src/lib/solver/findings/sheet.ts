@@ -57,6 +57,7 @@ export function sheetFindings(
         if (portPipeStart[slot + 1] === portPipeStart[slot]) continue;
         const port = portName(node, slot - portStart[i]);
         const r = result.ports[port];
+        if (!r) continue;
         if (lowest === null || r.pressureAbs < lowest.p) lowest = { p: r.pressureAbs, port };
       }
     }
@@ -86,6 +87,7 @@ export function sheetFindings(
     const gp = graph.pipeList[p];
     const id = gp.pipe.id;
     const r = indexed.pipes[p];
+    if (!r) continue;
     const name = gp.pipe.name;
     const pStart = pAtm + rhoG * ((r.headFrom ?? 0) - gp.elevationFrom);
     const pEnd = pAtm + rhoG * ((r.headTo ?? 0) - gp.elevationTo);

@@ -50,6 +50,14 @@ export const NOISE_HEAD_TOLERANCE = 1e-7;
  * iteration only ends after a tight solve. A direct solve is exact whatever this says.
  */
 export const LINEAR_FORCING = 1e-2;
+/**
+ * Node-balance (mass) tolerance, m³/s: the largest |inflow − outflow − demand| allowed at a free
+ * node for the solve to count as converged, 1e-9 m³/s (3.6 mL/h) or MASS_RELATIVE of the largest
+ * flow on the sheet where that is more (rounding of large flows).
+ */
+export const MASS_TOLERANCE = 1e-9;
+/** See MASS_TOLERANCE. */
+export const MASS_RELATIVE = 1e-12;
 /** Iteration limit. */
 export const MAX_ITERATIONS = 200;
 
@@ -64,9 +72,18 @@ export interface GgaOutcome {
   residual: number;
   /** Largest continuity error at a free node, m³/s. */
   massImbalance: number;
+  /** The node-balance tolerance this solve was held to, m³/s (MASS_TOLERANCE). */
+  massTolerance: number;
+  /**
+   * True only when both balances meet their tolerances: every link's head balance (HEAD_TOLERANCE,
+   * NOISE_HEAD_TOLERANCE after LATCH_AFTER iterations; STIFF_FLOW_TOLERANCE on stiff links) and
+   * every free node's mass balance (MASS_TOLERANCE).
+   */
   converged: boolean;
   /** Links with the largest head residual, worst first (for a no-convergence finding). */
   worstLinks: number[];
+  /** Graph nodes with the largest mass imbalance above the tolerance, worst first. */
+  worstNodes: number[];
   /** How the node equations were solved: the method, and conjugate-gradient steps and direct fallbacks over all iterations (for benchmarks). */
   linear: { method: LinearMethod; cgIterations: number; fallbacks: number };
 }
@@ -267,6 +284,19 @@ export function gradientSolve(
     }
   }
 
+  const balance = nodeBalance(graph, activeNode, activeLink, flows);
+  let largestFlow = 0;
+  for (const k of active) largestFlow = Math.max(largestFlow, Math.abs(flows[k]));
+  const massTolerance = Math.max(MASS_TOLERANCE, MASS_RELATIVE * largestFlow);
+  const unbalanced: Array<[number, number]> = [];
+  for (let i = 0; i < graph.nodeCount; i++) {
+    if (!activeNode[i] || graph.fixed[i]) continue;
+    const b = Math.abs(balance[i]);
+    if (!(b <= massTolerance)) unbalanced.push([i, Number.isFinite(b) ? b : Infinity]);
+  }
+  unbalanced.sort((x, y) => y[1] - x[1]);
+  if (unbalanced.length > 0) converged = false;
+
   // Only a no-convergence finding names the worst links; a converged solve skips the pass.
   const worst: Array<[number, number]> = [];
   for (let k = 0; k < nLinks && !converged; k++) {
@@ -282,10 +312,12 @@ export function gradientSolve(
     heads,
     flows,
     iterations,
-    residual: Number.isFinite(residual) ? residual : Number.MAX_VALUE,
-    massImbalance: massImbalance(graph, activeNode, activeLink, flows),
+    residual,
+    massImbalance: largestOf(balance, activeNode, graph.fixed),
+    massTolerance,
     converged,
     worstLinks: worst.slice(0, 5).map(([k]) => k),
+    worstNodes: unbalanced.slice(0, 5).map(([i]) => i),
     linear: {
       method: linearSolver.method,
       cgIterations: linearSolver.stats.cgIterations - statsBefore.cgIterations,
@@ -294,24 +326,40 @@ export function gradientSolve(
   };
 }
 
-/** Largest |Σ outflow − Σ inflow| at a free active node, m³/s. */
+/** Flow in minus flow out at each graph node, less the demand taken there, m³/s. */
+function nodeBalance(
+  graph: HydraulicGraph,
+  activeNode: Uint8Array,
+  activeLink: Uint8Array,
+  flows: Float64Array,
+): Float64Array {
+  const balance = new Float64Array(graph.nodeCount);
+  for (let i = 0; i < graph.nodeCount; i++) balance[i] = activeNode[i] ? -graph.demand[i] : 0;
+  graph.links.forEach((link, k) => {
+    if (!activeLink[k]) return;
+    balance[link.from] -= flows[k];
+    balance[link.to] += flows[k];
+  });
+  return balance;
+}
+
+/** Largest |balance| at a free active node (NaN if any is NaN). */
+function largestOf(balance: Float64Array, activeNode: Uint8Array, fixed: Uint8Array): number {
+  let worst = 0;
+  for (let i = 0; i < balance.length; i++) {
+    if (!activeNode[i] || fixed[i]) continue;
+    const b = Math.abs(balance[i]);
+    if (!(b <= worst)) worst = b;
+  }
+  return worst;
+}
+
+/** Largest |Σ outflow − Σ inflow| at a free active node, m³/s (raw: NaN or Infinity if the flows are). */
 export function massImbalance(
   graph: HydraulicGraph,
   activeNode: Uint8Array,
   activeLink: Uint8Array,
   flows: Float64Array,
 ): number {
-  // Flow in minus flow out at each node, less the demand taken there.
-  const balance = new Float64Array(graph.nodeCount);
-  for (let i = 0; i < graph.nodeCount; i++) balance[i] = -graph.demand[i];
-  graph.links.forEach((link, k) => {
-    if (!activeLink[k]) return;
-    balance[link.from] -= flows[k];
-    balance[link.to] += flows[k];
-  });
-  let worst = 0;
-  for (let i = 0; i < graph.nodeCount; i++) {
-    if (activeNode[i] && !graph.fixed[i]) worst = Math.max(worst, Math.abs(balance[i]));
-  }
-  return Number.isFinite(worst) ? worst : Number.MAX_VALUE;
+  return largestOf(nodeBalance(graph, activeNode, activeLink, flows), activeNode, graph.fixed);
 }

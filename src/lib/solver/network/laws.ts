@@ -14,10 +14,10 @@ import { ISA_STANDARD_GRAVITY } from '../../physics/atmosphere';
 export const GRAVITY = ISA_STANDARD_GRAVITY;
 
 /**
- * Resistance of a shut link, and of a non-return link (pump, check valve) against reverse
- * flow, s/m²: h = R·Q. A closed element is a stiff linear resistance rather than a removed
- * link, so the pressure in a blocked-in section still follows from the rest of the sheet; it
- * passes |ΔH|/R, i.e. 1e-8 m³/s (0.036 L/h) for 100 m of head across it.
+ * Resistance of a non-return link (pump, check valve) against reverse flow, s/m²: h = R·Q; it
+ * passes |ΔH|/R, i.e. 1e-8 m³/s (0.036 L/h) for 100 m of head across it. A shut link (ClosedLaw,
+ * the same R) marks a shut valve or a stopped pump: it takes no part in the solve (topology.ts),
+ * so nothing passes it, and a section shut in behind it has no determined pressure.
  */
 export const CLOSED_RESISTANCE = 1e10;
 

@@ -20,6 +20,7 @@ import { findings } from '../findings/catalogue';
 import type { SolveFluid } from '../fluid';
 import {
   area,
+  CLOSED_RESISTANCE,
   ClosedLaw,
   GRAVITY,
   LocalLossLaw,
@@ -51,6 +52,14 @@ export interface TwoPortLink {
   fixedFlow: number;
   info: TwoPortInfo;
 }
+
+/**
+ * Control-valve coefficient c (h = c·Q|Q|, s²/m⁵) from which a valve counts as shut: it then
+ * passes less at 100 m of head (√(100/c)) than a shut valve's CLOSED_RESISTANCE lets through
+ * (100/R), i.e. c ≥ R²/100. Such a valve (e.g. linear, opened 1e-9) would otherwise put slopes
+ * beyond working precision into the node equations.
+ */
+export const NEAR_SHUT_COEFFICIENT = (CLOSED_RESISTANCE * CLOSED_RESISTANCE) / 100;
 
 const NON_RETURN = new Set(['swing-check-valve', 'lift-check-valve']);
 
@@ -154,8 +163,17 @@ function controlValveLink(valve: ControlValve, pipeIn: number, fluid: SolveFluid
   }
   // IEC 60534-2-1 eq. (1): Δp is quadratic in Q, so c = Δp(Q = 1 m³/s)/(ρg).
   const c = valvePressureDropFromFlow(kv, 1, fluid.density) / (fluid.density * GRAVITY);
+  if (!(c < NEAR_SHUT_COEFFICIENT)) {
+    // Opened so little that it passes less than a shut valve does (see NEAR_SHUT_COEFFICIENT).
+    return {
+      law: new ClosedLaw(),
+      fixedFlow: 0,
+      info: { kind: 'control-valve', kv, closed: true },
+    };
+  }
   return {
-    law: new QuadraticLaw(c, area(pipeIn) * 1),
+    // Start at 1 m/s in the pipe, or at the flow that 10 m of head would pass if less.
+    law: new QuadraticLaw(c, Math.min(area(pipeIn) * 1, Math.sqrt(10 / c))),
     fixedFlow: 0,
     info: { kind: 'control-valve', kv, closed: false },
   };
