@@ -92,7 +92,6 @@ export interface Pump extends NodeBase {
   dutyFlow: number;
 }
 
-
 /**
  * An inline fitting, manual valve, check valve, strainer, meter, reducer/expander or
  * restriction orifice. Ports: 'in', 'out'. A tee is drawn as a junction plus a fitting of
