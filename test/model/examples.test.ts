@@ -2,7 +2,7 @@ import { readFileSync, readdirSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { EXAMPLES, exampleUrl, loadExample } from '../../src/lib/model/examples';
-import { parseProjectFile, serializeProject } from '../../src/lib/model/file';
+import { CURRENT_VERSION, parseProjectFile, serializeProject } from '../../src/lib/model/file';
 import { portElevation } from '../../src/lib/model/ports';
 import type { HeadrouteDocument, Pump } from '../../src/lib/model/types';
 
@@ -29,7 +29,7 @@ describe('demo projects', () => {
     expect(direct.ok).toBe(true);
     const doc = await load(file);
     if (direct.ok) expect(doc).toEqual(direct.document);
-    expect(doc.version).toBe(1);
+    expect(doc.version).toBe(CURRENT_VERSION);
     // Written as this app writes files (a save round-trips to the same text).
     expect(serializeProject(doc)).toBe(text);
     // Every node is connected and every stored route names existing nodes.

@@ -85,7 +85,7 @@ describe('migrations', () => {
     if (!result.ok) return;
     expect(result.migratedFrom).toBe(0);
     const doc = result.document;
-    expect(doc.version).toBe(1);
+    expect(doc.version).toBe(CURRENT_VERSION);
     expect(doc.settings.liquid).toEqual({ kind: 'library', id: 'water' });
     expect(doc.settings.temperature).toBeCloseTo(313.15, 9);
     expect(doc.settings.atmosphericPressureOverride).toBeNull();

@@ -129,17 +129,24 @@ export function expectConservation(doc: HeadrouteDocument, result: SolveResult):
       expect(Math.abs(q - (node.outflow ?? 0)), `outflow at ${key}`).toBeLessThan(1e-9);
       continue;
     }
+    // A branch point with a draw-off (or supply) takes exactly that flow out of the sheet.
+    if (node.kind === 'junction' && node.outflow !== undefined) {
+      expect(Math.abs(q - node.outflow), `draw-off at ${key}`).toBeLessThan(1e-9);
+      continue;
+    }
     const kind = node.kind;
     if (kind === 'vessel' || kind === 'boundary') continue;
     expect(Math.abs(q), `continuity at ${key}`).toBeLessThan(1e-9);
   }
-  // Energy: along each pipe, EGL drop = friction + end losses (signed by flow).
+  // Energy: along each pipe, EGL drop = friction + the loss of the fittings it carries (signed
+  // by flow; entrance and exit losses sit outside the pipe-end EGLs).
   for (const [id] of Object.entries(doc.pipes)) {
     const r = result.pipes[id];
     if (!r) continue;
     const sign = r.flow >= 0 ? 1 : -1;
     const drop = (r.totalHeadFrom! - r.totalHeadTo!) * sign;
-    expect(Math.abs(drop - r.frictionLoss), `EGL along ${id}`).toBeLessThan(1e-6);
+    const losses = r.frictionLoss + (r.fittingLoss ?? 0);
+    expect(Math.abs(drop - losses), `EGL along ${id}`).toBeLessThan(1e-6);
   }
 }
 

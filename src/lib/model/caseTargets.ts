@@ -7,4 +7,6 @@ export const CASE_NODE_GROUPS = [
   ['pumps', 'pump'],
   ['controlValves', 'control-valve'],
   ['boundaries', 'boundary'],
+  ['valves', 'fitting'],
+  ['junctions', 'junction'],
 ] as const satisfies ReadonlyArray<readonly [keyof CaseOverrides, NodeKind]>;

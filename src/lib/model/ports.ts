@@ -17,7 +17,7 @@
  *                   right for even list positions and left for odd — at a height proportional to
  *                   (nozzle z − vessel z) / vessel height, clamped to the shell.
  */
-import type { HeadrouteDocument, Nozzle, PortRef, SheetNode, Vessel } from './types';
+import type { HeadrouteDocument, Nozzle, PortRef, Pump, SheetNode, Vessel } from './types';
 
 /** Drawn vessel shell width, sheet units. */
 export const VESSEL_WIDTH = 80;
@@ -66,7 +66,8 @@ function nozzleOf(vessel: Vessel, port: string): Nozzle | undefined {
 }
 
 /**
- * Elevation of a port, m: a vessel nozzle's own elevation, otherwise the node's z.
+ * Elevation of a port, m: a vessel nozzle's own elevation, a pump flange's own elevation when
+ * set, otherwise the node's z.
  * Throws when the node or port does not exist (a validated document never has such refs).
  */
 export function portElevation(doc: HeadrouteDocument, ref: PortRef): number {
@@ -74,7 +75,14 @@ export function portElevation(doc: HeadrouteDocument, ref: PortRef): number {
   if (!node) throw new Error(`No node with id "${ref.node}"`);
   if (!hasPort(node, ref.port)) throw new Error(`Node "${ref.node}" has no port "${ref.port}"`);
   if (node.kind === 'vessel') return nozzleOf(node, ref.port)!.z;
+  if (node.kind === 'pump') return pumpFlangeElevation(node, ref.port);
   return node.z;
+}
+
+/** Elevation of a pump's 'suction' or 'discharge' flange, m (the pump's z where not set). */
+export function pumpFlangeElevation(pump: Pump, port: string): number {
+  const z = port === 'suction' ? pump.suctionElevation : pump.dischargeElevation;
+  return z ?? pump.z;
 }
 
 /**

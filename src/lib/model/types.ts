@@ -90,6 +90,10 @@ export interface Pump extends NodeBase {
   mode: 'rating' | 'duty';
   /** Duty flow, m³/s; used when mode is 'duty'. */
   dutyFlow: number;
+  /** Suction flange centreline elevation, m; absent means z (NPSHa is taken at this flange). */
+  suctionElevation?: number;
+  /** Discharge flange centreline elevation, m; absent means z. */
+  dischargeElevation?: number;
 }
 
 /**
@@ -137,9 +141,14 @@ export interface Waypoint extends NodeBase {
   kind: 'waypoint';
 }
 
-/** A branch point where several pipes meet. Port 'hub' takes any number of pipes. */
+/**
+ * A branch point where several pipes meet. Port 'hub' takes any number of pipes. It may take a
+ * fixed draw-off (a known flow leaving the sheet there, positive) or supply (negative).
+ */
 export interface Junction extends NodeBase {
   kind: 'junction';
+  /** Flow leaving the sheet at the branch point, m³/s; negative enters it; absent means none. */
+  outflow?: number;
 }
 
 /**
@@ -166,6 +175,42 @@ export type PipeBore =
   | { mode: 'catalogue'; nominalSize: string; schedule: string }
   | { mode: 'typed'; innerDiameter: number };
 
+/**
+ * Fitting types a pipe's fittings list may carry. Not reducers, expanders or orifices (their K
+ * comes from diameters of their own) nor check valves (they stop reverse flow): those are
+ * drawn as fitting nodes.
+ */
+export type PipeFittingType = Exclude<
+  FittingType,
+  'reducer' | 'expander' | 'restriction-orifice' | 'swing-check-valve' | 'lift-check-valve'
+>;
+
+/** One line of a pipe's fittings list: `count` fittings of one type, K as for a fitting node. */
+export interface PipeFittingItem {
+  fittingType: PipeFittingType;
+  /** How many of them (a whole number, at least 1). */
+  count: number;
+  lossMethod: LossMethod;
+  /** K of one fitting when lossMethod is 'fixed' (and where a table has no row). */
+  fixedK: number;
+}
+
+/**
+ * Where a pipe's fitting losses act along it: at its inlet (the `from` end), its outlet (the
+ * `to` end), spread evenly along it, or at one chainage from its `from` end.
+ */
+export type FittingLossPlace = 'inlet' | 'outlet' | 'spread' | 'chainage';
+
+/** Fittings carried by a pipe instead of being drawn as nodes (K referred to the pipe's bore). */
+export interface PipeFittings {
+  items: PipeFittingItem[];
+  /** An extra lumped K, referred to the pipe's velocity (0 for none). */
+  lumpedK: number;
+  place: FittingLossPlace;
+  /** Chainage from the pipe's `from` end, m; used when place is 'chainage'. */
+  chainage?: number;
+}
+
 /** A pipe: a connection record between two ports. Flow is positive from `from` to `to`. */
 export interface Pipe {
   id: Id;
@@ -182,6 +227,8 @@ export interface Pipe {
   roughness: number | null;
   /** Design pressure, Pa gauge; null when not set. */
   designPressureGauge: number | null;
+  /** Fittings on the pipe (elbows, valves… not drawn as nodes); absent means none. */
+  fittings?: PipeFittings;
 }
 
 /** NPSH margin rule: both must hold. */
@@ -226,6 +273,10 @@ export interface CaseOverrides {
   controlValves?: Record<Id, { opening?: number }>;
   /** A boundary's pressure (Pa abs) or, when it holds a flow, its outflow (m³/s). */
   boundaries?: Record<Id, { pressureAbs?: number; outflow?: number }>;
+  /** Manual valves (fitting nodes) opened or shut. */
+  valves?: Record<Id, { closed?: boolean }>;
+  /** A branch point's draw-off (m³/s leaving; negative is a supply). */
+  junctions?: Record<Id, { outflow?: number }>;
 }
 
 /** A named set of overrides (an operating case). */

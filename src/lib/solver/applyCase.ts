@@ -6,7 +6,8 @@ import type { HeadrouteDocument, Id, SheetNode } from '../model/types';
 /**
  * The document as it stands in case `caseId`: the case's overrides (liquid, temperature,
  * atmospheric pressure, vessel levels and gas pressures, pump running/speed/mode/duty flow,
- * control-valve openings, boundary pressures or flows) applied to a shallow copy. The base document is never changed.
+ * control-valve openings, boundary pressures or flows, manual valves open or shut, branch-point
+ * draw-offs) applied to a shallow copy. The base document is never changed.
  * A null, missing or unknown case id gives the base document itself. Overrides naming a node
  * that does not exist, or a node of another kind, are skipped.
  */
@@ -59,6 +60,16 @@ export function applyCase(
       pressureAbs: patch.pressureAbs ?? target.pressureAbs,
       outflow: patch.outflow ?? target.outflow,
     };
+  }
+  for (const [id, patch] of Object.entries(overrides.valves ?? {})) {
+    const target = node(id);
+    if (target?.kind !== 'fitting') continue;
+    nodes[id] = { ...target, closed: patch.closed ?? target.closed };
+  }
+  for (const [id, patch] of Object.entries(overrides.junctions ?? {})) {
+    const target = node(id);
+    if (target?.kind !== 'junction') continue;
+    nodes[id] = { ...target, outflow: patch.outflow ?? target.outflow };
   }
   return { ...doc, settings, nodes };
 }

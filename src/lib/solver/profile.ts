@@ -14,6 +14,7 @@ import type { HeadrouteDocument, Id, PortRef, Vessel } from '../model/types';
 import { applyCase } from './applyCase';
 import { GRAVITY } from './network/laws';
 import { vesselGasHead } from './network/nozzleHeads';
+import { fittingStepAt } from './network/pipeFittings';
 import { routeLegs, type RouteLeg } from './route';
 import type { Profile, SolveResult, Station } from './types';
 
@@ -86,7 +87,13 @@ function portStation(
   return station(fluid, ref.node, at, chainage, z, r?.head ?? NaN, r?.totalHead ?? NaN);
 }
 
-/** Stations along one pipe of the route, from its start (chainage `start`) to its end. */
+/**
+ * Stations along one pipe of the route, from its start (chainage `start`) to its end. The EGL
+ * falls by the friction loss evenly along the pipe and by the loss of the fittings it carries
+ * where they act (pipeFittings.ts): a step, with two stations at one chainage, at the inlet,
+ * the outlet or the given chainage, or evenly when spread. One bore: the HGL keeps the EGL's
+ * distance below it (v²/2g) all along.
+ */
 function pipeStations(
   doc: HeadrouteDocument,
   result: SolveResult,
@@ -100,30 +107,40 @@ function pipeStations(
   const length = Number.isFinite(pipe.length) && pipe.length > 0 ? pipe.length : 0;
   const zFrom = r?.elevationFrom ?? portElevation(doc, pipe.from);
   const zTo = r?.elevationTo ?? portElevation(doc, pipe.to);
-  const ends = {
-    z: forward ? [zFrom, zTo] : [zTo, zFrom],
-    hgl: forward ? [r?.headFrom, r?.headTo] : [r?.headTo, r?.headFrom],
-    egl: forward ? [r?.totalHeadFrom, r?.totalHeadTo] : [r?.totalHeadTo, r?.totalHeadFrom],
-  };
-  const lerp = ([a, b]: Array<number | undefined>, t: number) =>
-    a === undefined || b === undefined ? NaN : a + (b - a) * t;
+  const eglFrom = r?.totalHeadFrom ?? NaN;
+  const eglTo = r?.totalHeadTo ?? NaN;
+  const hglFrom = r?.headFrom ?? NaN;
+  // The fittings' share of the EGL drop from → to (signed like the flow), the rest is friction.
+  const fittingDrop = r ? Math.sign(r.flow) * (r.fittingLoss ?? 0) : 0;
+  const frictionDrop = eglFrom - eglTo - fittingDrop;
   const n = length > 0 ? segments : 1;
-  const out: Station[] = [];
-  for (let i = 0; i <= n; i++) {
-    const t = i / n;
-    out.push(
-      station(
-        fluid,
-        pipe.id,
-        'pipe',
-        start + length * t,
-        lerp(ends.z, t),
-        lerp(ends.hgl, t),
-        lerp(ends.egl, t),
-      ),
-    );
+  // Where the fittings' loss steps (null: spread evenly, or none), and the share of it taken
+  // by t (fraction of the length from the `from` end), on the far side of a step when `after`.
+  const step = length > 0 && fittingDrop !== 0 ? fittingStepAt(pipe) : null;
+  const share = (t: number, after: boolean) =>
+    step === null ? t : t * length > step || (t * length === step && after) ? 1 : 0;
+  const points: Array<{ t: number; after: boolean }> = [];
+  for (let i = 0; i <= n; i++) points.push({ t: i / n, after: true });
+  if (step !== null) {
+    const at = points.findIndex((p) => p.t * length >= step);
+    const t = step / length;
+    if (points[at].t * length === step) points.splice(at, 0, { t: points[at].t, after: false });
+    else points.splice(at, 0, { t, after: false }, { t, after: true });
   }
-  return out;
+  const stations = points.map(({ t, after }) => {
+    const egl = eglFrom - frictionDrop * t - fittingDrop * share(t, after);
+    return station(
+      fluid,
+      pipe.id,
+      'pipe',
+      start + length * (forward ? t : 1 - t),
+      zFrom + (zTo - zFrom) * t,
+      hglFrom + (egl - eglFrom),
+      egl,
+    );
+  });
+  if (!forward) stations.reverse();
+  return stations;
 }
 
 /**

@@ -103,6 +103,7 @@ export function elementResults(
       frictionFactor: friction?.factor ?? 0,
       frictionLoss: Math.abs(law.friction(q)),
       endLosses: Math.abs(law.endLoss(q)),
+      fittingLoss: Math.abs(law.fittingLoss(q)),
       innerDiameter: law.diameter,
       headFrom: totalFrom - vh,
       headTo: totalTo - vh,
@@ -111,6 +112,7 @@ export function elementResults(
       elevationFrom: gp.elevationFrom,
       elevationTo: gp.elevationTo,
     };
+    if (law.hasFittings) result.fittingK = law.fittingsK(q);
     pipes[gp.id] = result;
     pipeResults[p] = result;
     pipeFlow[p] = result.flow;

@@ -34,6 +34,13 @@ export interface PipeResult {
   frictionLoss: number;
   /** Entrance/exit losses charged to this pipe at vessel nozzles, m. */
   endLosses: number;
+  /**
+   * Loss of the fittings the pipe carries (its fittings list and lumped K), m; 0 or absent when
+   * it carries none. Drawn fitting nodes are not counted here (their loss is the node's).
+   */
+  fittingLoss?: number;
+  /** Loss coefficient of the pipe's fittings at this flow (referred to its velocity); absent when none. */
+  fittingK?: number;
   innerDiameter: number;
   /** HGL at the pipe's `from` end, m (inside the pipe, after any entrance loss). */
   headFrom?: number;

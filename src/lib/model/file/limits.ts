@@ -20,3 +20,6 @@ export const MAX_DEPTH = 16;
 /** Largest magnitude of a sheet coordinate, sheet units, and of an elevation, m. */
 export const MAX_COORDINATE = 1e7;
 export const MAX_ELEVATION = 1e4;
+/** Most lines in one pipe's fittings list, and most fittings on one line. */
+export const MAX_PIPE_FITTING_LINES = 50;
+export const MAX_FITTING_COUNT = 1000;

@@ -94,8 +94,24 @@ const draftToV1: Migration = {
   },
 };
 
+/**
+ * Version 2 adds optional fields only: a pipe's fittings list (`fittings`), a pump's suction
+ * and discharge flange elevations, a branch point's draw-off (`outflow`), and the case
+ * overrides `valves` (manual valves open or shut) and `junctions` (a branch point's draw-off).
+ * A version 1 file has none of them, which means: no fittings on any pipe, both flanges at the
+ * pump's z, no draw-offs at branch points, and cases that change none of these.
+ */
+const v1ToV2: Migration = {
+  from: 1,
+  to: 2,
+  description: 'version 1 → 2: fittings on pipes, pump flange elevations, branch-point draw-offs',
+  migrate(raw) {
+    return { ok: true, value: { ...raw, version: 2 } };
+  },
+};
+
 /** All migrations, in order; `MIGRATIONS[i]` upgrades version i to i + 1. */
-export const MIGRATIONS: readonly Migration[] = [draftToV1];
+export const MIGRATIONS: readonly Migration[] = [draftToV1, v1ToV2];
 
 /** Upgrade `raw` from `version` to the newest version, one step at a time. */
 export function migrate(raw: Json, version: number): MigrationResult {

@@ -16,8 +16,18 @@ import {
   MAX_SHORT_TEXT,
   MAX_TABLE_ROWS,
   MAX_ELEMENTS,
+  MAX_FITTING_COUNT,
+  MAX_PIPE_FITTING_LINES,
 } from './limits';
-import type { Case, HeadrouteDocument, Pipe, ProjectSettings, Route, SheetNode } from '../types';
+import type {
+  Case,
+  HeadrouteDocument,
+  Pipe,
+  PipeFittingType,
+  ProjectSettings,
+  Route,
+  SheetNode,
+} from '../types';
 
 const finite = v.pipe(v.number(), v.finite());
 const positive = v.pipe(v.number(), v.finite(), v.gtValue(0));
@@ -93,6 +103,8 @@ const PumpSchema = v.object({
   running: v.boolean(),
   mode: v.picklist(['rating', 'duty']),
   dutyFlow: nonNegative,
+  suctionElevation: v.optional(elevation),
+  dischargeElevation: v.optional(elevation),
 });
 
 /** Fitting types known to the loss library. */
@@ -141,7 +153,11 @@ const ControlValveSchema = v.object({
 });
 
 const WaypointSchema = v.object({ ...nodeBase, kind: v.literal('waypoint') });
-const JunctionSchema = v.object({ ...nodeBase, kind: v.literal('junction') });
+const JunctionSchema = v.object({
+  ...nodeBase,
+  kind: v.literal('junction'),
+  outflow: v.optional(finite),
+});
 const BoundarySchema = v.object({
   ...nodeBase,
   kind: v.literal('boundary'),
@@ -166,6 +182,30 @@ const bore = v.variant('mode', [
   v.object({ mode: v.literal('typed'), innerDiameter: positive }),
 ]);
 
+/** Fitting types a pipe's fittings list may carry (see PipeFittingType). */
+export const PIPE_FITTING_TYPES = FITTING_TYPES.filter(
+  (t): t is PipeFittingType =>
+    t !== 'reducer' &&
+    t !== 'expander' &&
+    t !== 'restriction-orifice' &&
+    t !== 'swing-check-valve' &&
+    t !== 'lift-check-valve',
+);
+
+const pipeFittingItem = v.object({
+  fittingType: v.picklist(PIPE_FITTING_TYPES),
+  count: v.pipe(v.number(), v.integer(), v.minValue(1), v.maxValue(MAX_FITTING_COUNT)),
+  lossMethod: v.picklist(['fixed', '2K', '3K']),
+  fixedK: nonNegative,
+});
+
+const pipeFittings = v.object({
+  items: v.pipe(v.array(pipeFittingItem), v.maxLength(MAX_PIPE_FITTING_LINES)),
+  lumpedK: nonNegative,
+  place: v.picklist(['inlet', 'outlet', 'spread', 'chainage']),
+  chainage: v.optional(nonNegative),
+});
+
 /** A pipe record. */
 export const PipeSchema = v.object({
   id: IdSchema,
@@ -178,6 +218,7 @@ export const PipeSchema = v.object({
   material: shortText,
   roughness: v.nullable(nonNegative),
   designPressureGauge: v.nullable(finite),
+  fittings: v.optional(pipeFittings),
 });
 
 const userLiquidRow = v.object({
@@ -243,6 +284,8 @@ const overrides = v.object({
       v.object({ pressureAbs: v.optional(positive), outflow: v.optional(finite) }),
     ),
   ),
+  valves: v.optional(v.record(IdSchema, v.object({ closed: v.optional(v.boolean()) }))),
+  junctions: v.optional(v.record(IdSchema, v.object({ outflow: v.optional(finite) }))),
 });
 
 /** A case (named overrides). */

@@ -98,3 +98,32 @@ export function fittingLossCoefficient(
   if (hooper) return hooper2K(hooper, re, innerDiameter);
   return fixedK;
 }
+
+/**
+ * The two parts of a fitting's loss coefficient, K = k1/Re + kConstant, referred to the velocity
+ * in the pipe of the given inner diameter: the form of both the 2-K method (Hooper, 1981:
+ * k1 = K1, kConstant = K∞(1 + 1/D)) and the 3-K method (Darby, 2001: k1 = K1,
+ * kConstant = Ki(1 + Kd/D^0.3)); a fixed K, or a type neither table has, is kConstant alone.
+ * With Re no smaller than LAMINAR_REYNOLDS_FLOOR, k1/Re + kConstant equals
+ * `fittingLossCoefficient` for the same arguments.
+ * @throws RangeError as `fittingLossCoefficient` does
+ */
+export function fittingLossTerms(
+  type: FittingType,
+  method: LossMethod,
+  innerDiameter: number,
+  fixedK: number,
+): { k1: number; kConstant: number } {
+  if (method === 'fixed') return { k1: 0, kConstant: fixedK };
+  // Checks the type and the diameter as the coefficient does (throws the same errors).
+  fittingLossCoefficient(type, method, 1, innerDiameter, fixedK);
+  if (method === '3K') {
+    const darby = DARBY_3K[type];
+    if (darby) return { k1: darby.k1, kConstant: darby3K({ ...darby, k1: 0 }, 1, innerDiameter) };
+  }
+  const hooper = HOOPER_2K[type];
+  if (hooper) {
+    return { k1: hooper.k1, kConstant: hooper2K({ ...hooper, k1: 0 }, 1, innerDiameter) };
+  }
+  return { k1: 0, kConstant: fixedK };
+}

@@ -34,6 +34,7 @@ import {
   portName,
   portsNeedingPipe,
 } from './portSlots';
+import { fittingsBeyondEnd, pipeFittingTerms } from './pipeFittings';
 import { recordKeysAndValues } from './recordValues';
 import { twoPortLink, type TwoPortInfo } from './twoPort';
 
@@ -216,6 +217,18 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       }
       case 'junction':
         portNode[s] = newNode(i, null);
+        // A draw-off (or, negative, a supply) at the branch point: a known node demand.
+        if (node.outflow !== undefined && node.outflow !== 0) {
+          if (Number.isFinite(node.outflow)) demand[portNode[s]] = node.outflow;
+          else
+            out.push(
+              findings.invalidInput(
+                node.name,
+                'its draw-off is not a number; the branch point is solved with none',
+                node.id,
+              ),
+            );
+        }
         break;
       case 'pump':
       case 'fitting':
@@ -303,6 +316,25 @@ export function buildGraph(doc: HeadrouteDocument, fluid: SolveFluid): Hydraulic
       colebrook,
       store,
     );
+    const terms = pipeFittingTerms(pipe, diameter);
+    if ('problem' in terms) {
+      out.push(
+        findings.invalidInput(
+          pipe.name,
+          `${terms.problem}; the pipe is solved without its fittings`,
+          pipe.id,
+        ),
+      );
+    } else if (terms.k1 !== 0 || terms.k0 !== 0) law.setFittings(terms.k1, terms.k0);
+    if (fittingsBeyondEnd(pipe)) {
+      out.push(
+        findings.invalidInput(
+          pipe.name,
+          'its fittings are placed beyond its length; the profile shows them at its end',
+          pipe.id,
+        ),
+      );
+    }
     const from = portNode[fromSlot];
     const to = portNode[toSlot];
     const link = links.length;

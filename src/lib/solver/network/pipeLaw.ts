@@ -10,6 +10,7 @@ import {
   darcyFrictionFactor,
   type FrictionFactorResult,
   LAMINAR_LIMIT_REYNOLDS,
+  LAMINAR_REYNOLDS_FLOOR,
   reynoldsNumber,
   TURBULENT_LIMIT_REYNOLDS,
 } from '../../physics/friction';
@@ -34,8 +35,10 @@ const ROOT_X = 13;
 const ROOT_REYNOLDS = 14;
 const ROOT_SLOPE = 15;
 const TURBULENT_AT_LIMIT = 16;
+const FITTINGS_K1 = 17;
+const FITTINGS_K0 = 18;
 /** Numbers per pipe law. */
-const STRIDE = 17;
+const STRIDE = 19;
 
 /** The numbers of the pipe laws of one solve, STRIDE per law, in one Float64Array. */
 export class PipeLawStore {
@@ -85,7 +88,9 @@ export class ColebrookMemo {
  * (Colebrook–White, 64/Re, interpolated transition); in laminar flow the equivalent linear
  * Hagen–Poiseuille form h_f = 32 μ L v /(ρ g D²), which keeps the slope finite and non-zero at
  * Q = 0 (the small-flow linearisation). Plus the entrance/exit loss K v|v|/2g where an end sits
- * on a vessel nozzle or a boundary, K depending on the flow direction.
+ * on a vessel nozzle or a boundary, K depending on the flow direction, and the loss of the
+ * fittings the pipe carries, K v|v|/2g with K = k1/Re + k0 (2-K and 3-K methods, fixed K and a
+ * lumped K summed over the list; see `setFittings`), evaluated at the flow itself.
  */
 export class PipeLaw implements LinkLaw {
   /** The store's array (or the law's own) and the offset of this law's numbers in it. */
@@ -141,6 +146,55 @@ export class PipeLaw implements LinkLaw {
     d[o + ROOT_SLOPE] = NaN;
     // Colebrook–White f at Re = 4000 for this pipe, the upper end of the transition (lazy).
     d[o + TURBULENT_AT_LIMIT] = NaN;
+    // The fittings on the pipe: K = k1/Re + k0 (none until setFittings).
+    d[o + FITTINGS_K1] = 0;
+    d[o + FITTINGS_K0] = 0;
+  }
+
+  /**
+   * The fittings the pipe carries, as the two parts of their summed loss coefficient referred
+   * to the pipe's velocity: K = k1/Re + k0 (Re no smaller than LAMINAR_REYNOLDS_FLOOR).
+   */
+  setFittings(k1: number, k0: number): void {
+    this.d[this.o + FITTINGS_K1] = k1;
+    this.d[this.o + FITTINGS_K0] = k0;
+  }
+
+  /** True when the pipe carries fittings with a loss. */
+  get hasFittings(): boolean {
+    return this.d[this.o + FITTINGS_K1] !== 0 || this.d[this.o + FITTINGS_K0] !== 0;
+  }
+
+  /** Loss coefficient of the pipe's fittings at this flow, referred to the pipe's velocity. */
+  fittingsK(flow: number): number {
+    const k1 = this.d[this.o + FITTINGS_K1];
+    const k0 = this.d[this.o + FITTINGS_K0];
+    if (k1 === 0) return k0;
+    return k1 / Math.max(this.reynolds(flow), LAMINAR_REYNOLDS_FLOOR) + k0;
+  }
+
+  /** Loss of the fittings the pipe carries, m, signed like the flow: K v|v|/2g. */
+  fittingLoss(flow: number): number {
+    if (!this.hasFittings) return 0;
+    const v = flow / this.area;
+    return (this.fittingsK(flow) * v * Math.abs(v)) / (2 * GRAVITY);
+  }
+
+  /**
+   * d(fittingLoss)/dQ. With K = k1/Re + k0 and Re ∝ |Q| above the floor, the k1 part of the
+   * loss is linear in Q (slope (k1/Re)|v|/(2gA)) and the k0 part quadratic (slope 2k0|v|/(2gA));
+   * below the floor Re is held, so both parts are quadratic.
+   */
+  private fittingSlope(flow: number): number {
+    if (!this.hasFittings) return 0;
+    const k1 = this.d[this.o + FITTINGS_K1];
+    const k0 = this.d[this.o + FITTINGS_K0];
+    const a = this.area;
+    const speed = Math.abs(flow / a);
+    const re = this.reynolds(flow);
+    const k1Part = k1 === 0 ? 0 : k1 / Math.max(re, LAMINAR_REYNOLDS_FLOOR);
+    const k1Factor = re > LAMINAR_REYNOLDS_FLOOR ? 1 : 2;
+    return ((k1Factor * k1Part + 2 * k0) * speed) / (2 * GRAVITY * a);
   }
 
   /** Inner diameter, m. */
@@ -198,7 +252,7 @@ export class PipeLaw implements LinkLaw {
   }
 
   headLoss(flow: number): number {
-    return this.friction(flow) + this.endLoss(flow);
+    return this.friction(flow) + this.endLoss(flow) + this.fittingLoss(flow);
   }
 
   slope(flow: number): number {
@@ -206,7 +260,7 @@ export class PipeLaw implements LinkLaw {
     const a = this.area;
     const endSlope = (2 * k * Math.abs(flow)) / (2 * GRAVITY * a * a);
     this.evaluateFriction(flow);
-    return this.d[this.o + MEMO_SLOPE] + endSlope;
+    return this.d[this.o + MEMO_SLOPE] + endSlope + this.fittingSlope(flow);
   }
 
   /**

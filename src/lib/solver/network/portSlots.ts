@@ -70,9 +70,17 @@ export function portIndex(node: SheetNode, port: string): number {
   }
 }
 
-/** Elevation of the node's port at position `local`: a vessel nozzle's own z, otherwise the node's z. */
+/**
+ * Elevation of the node's port at position `local`: a vessel nozzle's own z, a pump flange's
+ * own elevation when set (suction 0, discharge 1), otherwise the node's z.
+ */
 export function portElevationAt(node: SheetNode, local: number): number {
-  return node.kind === 'vessel' ? node.nozzles[local].z : node.z;
+  if (node.kind === 'vessel') return node.nozzles[local].z;
+  if (node.kind === 'pump') {
+    const z = local === 0 ? node.suctionElevation : node.dischargeElevation;
+    return z ?? node.z;
+  }
+  return node.z;
 }
 
 /**
