@@ -4,9 +4,9 @@ import {
   addRoute,
   connect,
   importSurvey,
-  pipeRun,
   updatePipe,
 } from '../../../src/lib/model/commands';
+import { pipeRun } from '../../../src/lib/model/pipeRun';
 import { createDocument } from '../../../src/lib/model/defaults';
 import type { SurveyPoint } from '../../../src/lib/model/survey/parseSurvey';
 import { solve } from '../../../src/lib/solver/solve';

@@ -15,4 +15,4 @@ export { copyElements, pasteElements, duplicateElements, type Clip } from './cli
 export { addCase, renameCase, duplicateCase, deleteCase, updateCaseOverrides } from './cases';
 export { addRoute, updateRoute, deleteRoute } from './routes';
 export { updateSettings, renameDocument } from './project';
-export { importSurvey, pipeRun, type PipeRun } from './survey';
+export { importSurvey } from './survey';
