@@ -16,3 +16,4 @@ export { addCase, renameCase, duplicateCase, deleteCase, updateCaseOverrides } f
 export { addRoute, updateRoute, deleteRoute } from './routes';
 export { updateSettings, renameDocument } from './project';
 export { importSurvey } from './survey';
+export { setRunBore } from './runBore';
