@@ -110,3 +110,26 @@ describe('importSurvey', () => {
     expect(zs.length).toBeLessThan(2000);
   });
 });
+
+describe('importSurvey with fittings on the pipes', () => {
+  it('keeps every fitting of the run once, on the first new pipe', () => {
+    const doc = build(
+      gravityLine(),
+      updatePipe('L1', {
+        fittings: {
+          items: [{ fittingType: 'elbow-90-standard', count: 6, lossMethod: '2K', fixedK: 0.75 }],
+          lumpedK: 1.5,
+          place: 'chainage',
+          chainage: 30,
+        },
+      }),
+    );
+    const r = ok(doc, importSurvey('L1', survey(), 0.01));
+    expect(r.doc.pipes.L1.fittings).toEqual({
+      items: [{ fittingType: 'elbow-90-standard', count: 6, lossMethod: '2K', fixedK: 0.75 }],
+      lumpedK: 1.5,
+      place: 'spread',
+    });
+    expect(r.doc.pipes.L2.fittings).toBeUndefined();
+  });
+});

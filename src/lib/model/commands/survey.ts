@@ -13,7 +13,7 @@ import { portPosition } from '../ports';
 import { simplifyProfile } from '../survey/simplifyProfile';
 import type { SurveyPoint } from '../survey/parseSurvey';
 import { pipeRun } from '../pipeRun';
-import type { HeadrouteDocument, Id, Pipe, PortRef, SheetNode } from '../types';
+import type { HeadrouteDocument, Id, Pipe, PipeFittings, PortRef, SheetNode } from '../types';
 import type { Command } from './command';
 import { assignPatch, plain, validateRecord } from './check';
 import { commandErrors } from './errors';
@@ -41,17 +41,42 @@ function developedLength(points: readonly SurveyPoint[], a: number, b: number): 
   return length;
 }
 
-/** Pipe fields that stay with each new piece (everything but identity, ends and length). */
+/** Pipe fields that stay with each new piece (all but identity, ends, length and fittings). */
 function pipeTemplate(pipe: Pipe): Record<string, unknown> {
-  const { id: _id, name: _name, from: _from, to: _to, length: _length, ...rest } = plain(pipe);
+  const {
+    id: _id,
+    name: _name,
+    from: _from,
+    to: _to,
+    length: _length,
+    fittings: _fittings,
+    ...rest
+  } = plain(pipe);
   return structuredClone(rest) as Record<string, unknown>;
+}
+
+/**
+ * The fittings of every pipe of the run, gathered for the first new pipe: all items, the
+ * lumped Ks added, acting where the selected pipe's act (spread along it where that was one
+ * chainage, which no longer means the same place). Undefined when the run had none.
+ */
+export function runFittings(pipes: readonly Pipe[], selected: Pipe): PipeFittings | undefined {
+  const lists = pipes.map((p) => p.fittings).filter((f): f is PipeFittings => f !== undefined);
+  if (lists.length === 0) return undefined;
+  const place = selected.fittings?.place ?? lists[0].place;
+  return {
+    items: lists.flatMap((f) => f.items.map((i) => ({ ...i }))),
+    lumpedK: lists.reduce((sum, f) => sum + f.lumpedK, 0),
+    place: place === 'chainage' ? 'spread' : place,
+  };
 }
 
 /**
  * Lay a surveyed profile onto the run of `pipeId` (see `pipeRun`). `points` start at chainage 0
  * at the run's start; they are thinned by `simplifyProfile` with `tolerance` metres. The run's
- * end parts keep their own elevations. The first new pipe keeps `pipeId` and its name; each
- * pipe takes the selected pipe's bore, material, roughness and design pressure.
+ * end parts keep their own elevations. The first new pipe keeps `pipeId` and its name, and
+ * carries the run's fittings (`runFittings`); each pipe takes the selected pipe's bore,
+ * material, roughness and design pressure.
  */
 export function importSurvey(
   pipeId: Id,
@@ -83,6 +108,10 @@ export function importSurvey(
       if (after > MAX_ELEMENTS) return commandErrors.tooMany('elements', MAX_ELEMENTS);
 
       const template = pipeTemplate(draft.pipes[pipeId]);
+      const fittings = runFittings(
+        run.pipes.map((id) => plain(draft.pipes[id]) as Pipe),
+        plain(draft.pipes[pipeId]) as Pipe,
+      );
       const name = draft.pipes[pipeId].name;
       const removed = new Set(run.waypoints);
       for (const id of run.pipes) delete draft.pipes[id];
@@ -136,6 +165,7 @@ export function importSurvey(
           ...structuredClone(template),
           name: k === 1 ? name : id,
           length: developedLength(points, kept[k - 1], kept[k]),
+          ...(k === 1 && fittings ? { fittings: structuredClone(fittings) } : {}),
         });
         const invalid = validateRecord(PipeSchema, pipe, id);
         if (invalid) return invalid;
