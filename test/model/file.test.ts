@@ -50,15 +50,14 @@ describe('project file round trip', () => {
     expect(result.document.nodes.B9).toMatchObject({ holds: 'flow', outflow: -0.0025 });
   });
 
-  it('unknown extra fields are dropped, not kept', () => {
+  it('unknown extra fields are refused with their path, not dropped', () => {
     const raw = JSON.parse(serializeProject(sampleDocument()));
     raw.nodes.P1.colour = 'red';
-    raw.viewport = { zoom: 2 };
     const result = parseProjectFile(JSON.stringify(raw));
-    expect(result.ok).toBe(true);
-    if (!result.ok) return;
-    expect(result.document.nodes.P1).not.toHaveProperty('colour');
-    expect(result.document).not.toHaveProperty('viewport');
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expect(result.errors[0]).toMatchObject({ path: 'nodes.P1.colour' });
+    expect(result.errors[0].message).toContain('Unknown field "colour" in "P1"');
   });
 
   it('a byte-order mark at the start is accepted', () => {
@@ -107,6 +106,48 @@ describe('migrations', () => {
     });
     expect(doc.cases).toEqual({});
     expect(doc.routes).toEqual({});
+  });
+
+  it.each([1, 2])(
+    '%i → 3: a file without the later fields reads unchanged but for the version',
+    (version) => {
+      const doc = sampleDocument();
+      const old = { ...JSON.parse(serializeProject(doc)), version };
+      const step = migrate(old, version);
+      expect(step.ok).toBe(true);
+      if (step.ok) expect(step.value).toEqual({ ...old, version: 3 });
+      const result = parseProjectFile(JSON.stringify(old));
+      expect(result.ok).toBe(true);
+      if (!result.ok) return;
+      expect(result.migratedFrom).toBe(version);
+      expect(result.document).toEqual({ ...doc, version: CURRENT_VERSION });
+    },
+  );
+
+  it.each([1, 2])(
+    '%i → 3: boundary holds/outflow and case boundary overrides written before version 3 are kept',
+    (version) => {
+      const doc = build(
+        sampleDocument(),
+        addNode('boundary', { x: 400, y: 0 }, { id: 'B9', holds: 'flow', outflow: 0.004 }),
+        addCase('Less draw-off', { boundaries: { B9: { outflow: 0.001 } } }),
+      );
+      const old = { ...JSON.parse(serializeProject(doc)), version };
+      const result = parseProjectFile(JSON.stringify(old));
+      expect(result.ok).toBe(true);
+      if (!result.ok) return;
+      expect(result.migratedFrom).toBe(version);
+      expect(result.document.nodes.B9).toMatchObject({ holds: 'flow', outflow: 0.004 });
+      expect(result.document.cases.C1.overrides.boundaries).toEqual({ B9: { outflow: 0.001 } });
+    },
+  );
+
+  it.each([1, 2])('%i → 3: a key unknown to version 3 is refused, not dropped', (version) => {
+    const old = { ...JSON.parse(serializeProject(sampleDocument())), version };
+    old.pipes.L1.lenght = 40;
+    const result = parseProjectFile(JSON.stringify(old));
+    expect(result.ok).toBe(false);
+    if (!result.ok) expect(result.errors[0].path).toBe('pipes.L1.lenght');
   });
 
   it('0 → 1 leaves shapes it does not know for the schema to report', () => {

@@ -176,7 +176,7 @@ describe('hostile files', () => {
       expect(result.errors[0].path).toBe('nodes');
       expect(result.errors[0].message).toContain(`too many records, at most ${MAX_ELEMENTS}`);
     }
-  });
+  }, 60_000);
 
   it('reports at most 50 problems plus a summary line', () => {
     const doc = createDocument('Many faults');

@@ -19,9 +19,16 @@ export interface DocumentProblem {
   message: string;
 }
 
-/** Path segment for a record key: plain when it is identifier-like, bracketed otherwise. */
+/** Longest key written whole in a path; a longer (hostile) key is cut, so no message echoes it. */
+const MAX_PATH_KEY = 64;
+
+/**
+ * Path segment for a record key: plain when it is identifier-like, bracketed otherwise (quoted
+ * as JSON, so control characters and lone surrogates show as escapes; cut when very long).
+ */
 export function pathKey(key: string | number): string {
   if (typeof key === 'number') return `[${key}]`;
+  if (key.length > MAX_PATH_KEY) return `[${JSON.stringify(`${key.slice(0, 40)}…`)}]`;
   return /^[A-Za-z_][A-Za-z0-9_]*$/.test(key) ? `.${key}` : `[${JSON.stringify(key)}]`;
 }
 

@@ -6,7 +6,13 @@
  */
 import { describe, expect, it } from 'vitest';
 import { addCase, updateNode, updatePipe } from '../../../src/lib/model/commands';
-import { migrate, parseProjectFile, serializeProject } from '../../../src/lib/model/file';
+import {
+  CURRENT_VERSION,
+  MIGRATIONS,
+  migrate,
+  parseProjectFile,
+  serializeProject,
+} from '../../../src/lib/model/file';
 import { build, sampleDocument } from '../helpers';
 
 const fittings = {
@@ -36,14 +42,15 @@ describe('file format version 2', () => {
   it('1 → 2: a version 1 file opens, migrated, with no new fields', () => {
     const raw = JSON.parse(serializeProject(sampleDocument()));
     raw.version = 1;
-    const step = migrate(raw, 1);
+    const step = MIGRATIONS[1].migrate(raw);
     expect(step.ok).toBe(true);
     if (step.ok) expect(step.value.version).toBe(2);
+    expect(migrate(raw, 1)).toEqual({ ok: true, value: { ...raw, version: CURRENT_VERSION } });
     const result = parseProjectFile(JSON.stringify(raw));
     expect(result.ok).toBe(true);
     if (!result.ok) return;
     expect(result.migratedFrom).toBe(1);
-    expect(result.document.version).toBe(2);
+    expect(result.document.version).toBe(CURRENT_VERSION);
     expect(result.document.pipes.L1).not.toHaveProperty('fittings');
     expect(result.document.nodes.P1).not.toHaveProperty('suctionElevation');
     expect(result.document.nodes.J1).not.toHaveProperty('outflow');

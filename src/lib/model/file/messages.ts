@@ -15,13 +15,26 @@ export function describeValue(value: unknown): string {
   if (value === undefined) return 'missing';
   if (value === null) return 'empty (null)';
   if (typeof value === 'string') {
-    const text = value.length > MAX_QUOTE ? `${value.slice(0, MAX_QUOTE)}…` : value;
-    return `the text "${text}"`;
+    return `the text "${quoteKey(value)}"`;
   }
   if (typeof value === 'number') return String(value);
   if (typeof value === 'boolean') return value ? 'true' : 'false';
   if (Array.isArray(value)) return 'a list';
   return 'an object';
+}
+
+/** A key cut to a few dozen characters, control characters shown as escapes. */
+export function quoteKey(key: string): string {
+  const cut = key.length > MAX_QUOTE ? `${key.slice(0, MAX_QUOTE)}…` : key;
+  return JSON.stringify(cut).slice(1, -1);
+}
+
+/** A field the schema does not know: named with where it sits, never dropped. */
+function unknownFieldWords(issue: Issue): string {
+  const path = issue.path ?? [];
+  const parent = path[path.length - 2];
+  const where = parent ? ` in "${quoteKey(String(parent.key))}"` : ' at the top of the file';
+  return `Unknown field "${quoteKey(String(issue.input))}"${where}: this version of Headroute does not know it, so the file is refused rather than read without it (check the spelling, or open the file in the Headroute that wrote it).`;
 }
 
 const EXPECTED_WORDS: Record<string, string> = {
@@ -49,9 +62,11 @@ function fieldName(issue: Issue): string {
   if (!last) return 'The file';
   if (typeof last.key === 'number') {
     const parent = path[path.length - 2];
-    return parent ? `Entry ${last.key + 1} of "${String(parent.key)}"` : `Entry ${last.key + 1}`;
+    return parent
+      ? `Entry ${last.key + 1} of "${quoteKey(String(parent.key))}"`
+      : `Entry ${last.key + 1}`;
   }
-  return `"${String(last.key)}"`;
+  return `"${quoteKey(String(last.key))}"`;
 }
 
 /** One schema issue in plain words. */
@@ -61,6 +76,9 @@ export function describeIssue(issue: Issue): string {
   const req = (issue as { requirement?: unknown }).requirement;
   const keyIssue = issue.path?.[issue.path.length - 1]?.origin === 'key';
   switch (issue.type) {
+    case 'strict_object':
+      if (keyIssue && issue.expected === 'never') return unknownFieldWords(issue);
+      break;
     case 'finite':
       return `${field} must be a finite number, but is ${got}.`;
     case 'gt_value':
@@ -81,7 +99,7 @@ export function describeIssue(issue: Issue): string {
       return `${field} has too many records, at most ${String(req)} allowed.`;
     case 'regex':
       return keyIssue
-        ? `The record key "${String(issue.input).slice(0, MAX_QUOTE)}" is not a valid id (1–64 letters, digits, "_", "-" or ".", starting with a letter or digit).`
+        ? `The record key "${quoteKey(String(issue.input))}" is not a valid id (1–64 letters, digits, "_", "-" or ".", starting with a letter or digit).`
         : `${field} is not a valid id: ${got} (ids are 1–64 letters, digits, "_", "-" or ".", starting with a letter or digit).`;
     case 'picklist':
     case 'literal':
@@ -93,17 +111,15 @@ export function describeIssue(issue: Issue): string {
       );
     case 'custom':
       return `${field} should be an object of records keyed by id, but is ${got}.`;
-    default: {
-      if (issue.input === undefined) return `${field} is missing.`;
-      const expected = EXPECTED_WORDS[issue.type] ?? issue.expected ?? issue.type;
-      return `${field} should be ${expected}, but is ${got}.`;
-    }
   }
+  if (issue.input === undefined) return `${field} is missing.`;
+  const expected = EXPECTED_WORDS[issue.type] ?? issue.expected ?? issue.type;
+  return `${field} should be ${expected}, but is ${got}.`;
 }
 
 function recordWords(collection: string, key: string, record: unknown): string {
   const r = record && typeof record === 'object' ? (record as Record<string, unknown>) : {};
-  const name = typeof r.name === 'string' ? r.name.slice(0, MAX_QUOTE) : '';
+  const name = typeof r.name === 'string' ? quoteKey(r.name) : '';
   let kind: string;
   if (collection === 'nodes') {
     kind =

@@ -110,8 +110,28 @@ const v1ToV2: Migration = {
   },
 };
 
+/**
+ * Version 2 → 3. Version 3 is the first strict version: a key the schema does not know is
+ * refused with its path, not dropped. It also records, with a version of their own, fields
+ * that builds writing version 1 had added without a bump:
+ * - a boundary's `holds` ('pressure' | 'flow'; absent means 'pressure') and `outflow` (m³/s);
+ * - a case's `overrides.boundaries` (a boundary's `pressureAbs` or `outflow`).
+ * A version 1 or 2 file may carry them (written by those builds) or not (older ones); both
+ * read the same in version 3, so the step only stamps the version. An older file with any other
+ * key unknown to version 3 is refused by the strict schema after this step, as a version-3
+ * file is.
+ */
+const v2ToV3: Migration = {
+  from: 2,
+  to: 3,
+  description: 'version 2 → 3: strict keys; boundary holds/outflow and case boundary overrides',
+  migrate(raw) {
+    return { ok: true, value: { ...raw, version: 3 } };
+  },
+};
+
 /** All migrations, in order; `MIGRATIONS[i]` upgrades version i to i + 1. */
-export const MIGRATIONS: readonly Migration[] = [draftToV1, v1ToV2];
+export const MIGRATIONS: readonly Migration[] = [draftToV1, v1ToV2, v2ToV3];
 
 /** Upgrade `raw` from `version` to the newest version, one step at a time. */
 export function migrate(raw: Json, version: number): MigrationResult {

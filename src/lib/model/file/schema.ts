@@ -19,6 +19,7 @@ import {
   MAX_FITTING_COUNT,
   MAX_PIPE_FITTING_LINES,
 } from './limits';
+import { CURRENT_VERSION } from './version';
 import type {
   Case,
   HeadrouteDocument,
@@ -63,11 +64,11 @@ function recordOf<TValue extends v.GenericSchema>(value: TValue, max: number) {
   );
 }
 
-const portRef = v.object({ node: IdSchema, port: IdSchema });
+const portRef = v.strictObject({ node: IdSchema, port: IdSchema });
 
 const nodeBase = { id: IdSchema, name, x: coordinate, y: coordinate, z: elevation };
 
-const nozzle = v.object({
+const nozzle = v.strictObject({
   id: IdSchema,
   z: elevation,
   entranceK: nonNegative,
@@ -75,11 +76,11 @@ const nozzle = v.object({
   side: v.optional(v.picklist(['left', 'right'])),
 });
 
-const pumpPoint = v.object({ flow: nonNegative, value: nonNegative });
+const pumpPoint = v.strictObject({ flow: nonNegative, value: nonNegative });
 const curve = (min: number) =>
   v.pipe(v.array(pumpPoint), v.minLength(min), v.maxLength(MAX_CURVE_POINTS));
 
-const VesselSchema = v.object({
+const VesselSchema = v.strictObject({
   ...nodeBase,
   kind: v.literal('vessel'),
   open: v.boolean(),
@@ -89,13 +90,13 @@ const VesselSchema = v.object({
   nozzles: v.pipe(v.array(nozzle), v.minLength(1), v.maxLength(MAX_NOZZLES)),
 });
 
-const PumpSchema = v.object({
+const PumpSchema = v.strictObject({
   ...nodeBase,
   kind: v.literal('pump'),
   headCurve: curve(1),
   npshrCurve: curve(0),
   efficiencyCurve: v.pipe(
-    v.array(v.object({ flow: nonNegative, value: fraction })),
+    v.array(v.strictObject({ flow: nonNegative, value: fraction })),
     v.maxLength(MAX_CURVE_POINTS),
   ),
   ratedSpeed: positive,
@@ -128,7 +129,7 @@ export const FITTING_TYPES = [
   'restriction-orifice',
 ] as const;
 
-const FittingSchema = v.object({
+const FittingSchema = v.strictObject({
   ...nodeBase,
   kind: v.literal('fitting'),
   fittingType: v.picklist(FITTING_TYPES),
@@ -141,7 +142,7 @@ const FittingSchema = v.object({
   boreDiameter: v.optional(positive),
 });
 
-const ControlValveSchema = v.object({
+const ControlValveSchema = v.strictObject({
   ...nodeBase,
   kind: v.literal('control-valve'),
   ratedCoefficient: positive,
@@ -152,13 +153,13 @@ const ControlValveSchema = v.object({
   pressureRecoveryFactor: v.pipe(v.number(), v.finite(), v.gtValue(0), v.maxValue(1)),
 });
 
-const WaypointSchema = v.object({ ...nodeBase, kind: v.literal('waypoint') });
-const JunctionSchema = v.object({
+const WaypointSchema = v.strictObject({ ...nodeBase, kind: v.literal('waypoint') });
+const JunctionSchema = v.strictObject({
   ...nodeBase,
   kind: v.literal('junction'),
   outflow: v.optional(finite),
 });
-const BoundarySchema = v.object({
+const BoundarySchema = v.strictObject({
   ...nodeBase,
   kind: v.literal('boundary'),
   pressureAbs: positive,
@@ -178,8 +179,8 @@ export const NodeSchema = v.variant('kind', [
 ]);
 
 const bore = v.variant('mode', [
-  v.object({ mode: v.literal('catalogue'), nominalSize: shortText, schedule: shortText }),
-  v.object({ mode: v.literal('typed'), innerDiameter: positive }),
+  v.strictObject({ mode: v.literal('catalogue'), nominalSize: shortText, schedule: shortText }),
+  v.strictObject({ mode: v.literal('typed'), innerDiameter: positive }),
 ]);
 
 /** Fitting types a pipe's fittings list may carry (see PipeFittingType). */
@@ -192,14 +193,14 @@ export const PIPE_FITTING_TYPES = FITTING_TYPES.filter(
     t !== 'lift-check-valve',
 );
 
-const pipeFittingItem = v.object({
+const pipeFittingItem = v.strictObject({
   fittingType: v.picklist(PIPE_FITTING_TYPES),
   count: v.pipe(v.number(), v.integer(), v.minValue(1), v.maxValue(MAX_FITTING_COUNT)),
   lossMethod: v.picklist(['fixed', '2K', '3K']),
   fixedK: nonNegative,
 });
 
-const pipeFittings = v.object({
+const pipeFittings = v.strictObject({
   items: v.pipe(v.array(pipeFittingItem), v.maxLength(MAX_PIPE_FITTING_LINES)),
   lumpedK: nonNegative,
   place: v.picklist(['inlet', 'outlet', 'spread', 'chainage']),
@@ -207,7 +208,7 @@ const pipeFittings = v.object({
 });
 
 /** A pipe record. */
-export const PipeSchema = v.object({
+export const PipeSchema = v.strictObject({
   id: IdSchema,
   kind: v.literal('pipe'),
   name,
@@ -221,7 +222,7 @@ export const PipeSchema = v.object({
   fittings: v.optional(pipeFittings),
 });
 
-const userLiquidRow = v.object({
+const userLiquidRow = v.strictObject({
   temperature: positive,
   density: positive,
   viscosity: positive,
@@ -229,8 +230,8 @@ const userLiquidRow = v.object({
 });
 
 const liquid = v.variant('kind', [
-  v.object({ kind: v.literal('library'), id: shortText }),
-  v.object({
+  v.strictObject({ kind: v.literal('library'), id: shortText }),
+  v.strictObject({
     kind: v.literal('user'),
     name,
     table: v.pipe(v.array(userLiquidRow), v.minLength(1), v.maxLength(MAX_TABLE_ROWS)),
@@ -239,37 +240,37 @@ const liquid = v.variant('kind', [
 ]);
 
 /** Project settings. */
-export const SettingsSchema = v.object({
+export const SettingsSchema = v.strictObject({
   liquid,
   temperature: positive,
   siteElevation: elevation,
   atmosphericPressureOverride: v.nullable(positive),
   unitSystem: v.picklist(['SI', 'US']),
-  npshMargin: v.object({
+  npshMargin: v.strictObject({
     ratio: v.pipe(v.number(), v.finite(), v.minValue(1)),
     metres: nonNegative,
   }),
-  velocityGuidance: v.object({
+  velocityGuidance: v.strictObject({
     suctionMax: positive,
     dischargeMin: nonNegative,
     dischargeMax: positive,
   }),
 });
 
-const overrides = v.object({
+const overrides = v.strictObject({
   liquid: v.optional(liquid),
   temperature: v.optional(positive),
   atmosphericPressure: v.optional(positive),
   vessels: v.optional(
     v.record(
       IdSchema,
-      v.object({ liquidLevel: v.optional(elevation), gasPressureAbs: v.optional(positive) }),
+      v.strictObject({ liquidLevel: v.optional(elevation), gasPressureAbs: v.optional(positive) }),
     ),
   ),
   pumps: v.optional(
     v.record(
       IdSchema,
-      v.object({
+      v.strictObject({
         running: v.optional(v.boolean()),
         speed: v.optional(positive),
         mode: v.optional(v.picklist(['rating', 'duty'])),
@@ -277,31 +278,31 @@ const overrides = v.object({
       }),
     ),
   ),
-  controlValves: v.optional(v.record(IdSchema, v.object({ opening: v.optional(fraction) }))),
+  controlValves: v.optional(v.record(IdSchema, v.strictObject({ opening: v.optional(fraction) }))),
   boundaries: v.optional(
     v.record(
       IdSchema,
-      v.object({ pressureAbs: v.optional(positive), outflow: v.optional(finite) }),
+      v.strictObject({ pressureAbs: v.optional(positive), outflow: v.optional(finite) }),
     ),
   ),
-  valves: v.optional(v.record(IdSchema, v.object({ closed: v.optional(v.boolean()) }))),
-  junctions: v.optional(v.record(IdSchema, v.object({ outflow: v.optional(finite) }))),
+  valves: v.optional(v.record(IdSchema, v.strictObject({ closed: v.optional(v.boolean()) }))),
+  junctions: v.optional(v.record(IdSchema, v.strictObject({ outflow: v.optional(finite) }))),
 });
 
 /** A case (named overrides). */
-export const CaseSchema = v.object({ id: IdSchema, name, overrides });
+export const CaseSchema = v.strictObject({ id: IdSchema, name, overrides });
 
 /** A stored route. */
-export const RouteSchema = v.object({
+export const RouteSchema = v.strictObject({
   id: IdSchema,
   name,
   nodes: v.pipe(v.array(IdSchema), v.minLength(2), v.maxLength(MAX_ELEMENTS)),
 });
 
 /** The whole document, current version. */
-export const DocumentSchema = v.object({
+export const DocumentSchema = v.strictObject({
   format: v.literal('headroute'),
-  version: v.number(),
+  version: v.literal(CURRENT_VERSION),
   name,
   settings: SettingsSchema,
   nodes: recordOf(NodeSchema, MAX_ELEMENTS),
