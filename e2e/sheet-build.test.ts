@@ -102,7 +102,7 @@ test('a route drawn with the mouse solves on screen as the command line solves i
   // the receiver stands 8 m up; its liquid level is typed in feet
   await page.locator(`g.node[data-node-id="${receiver}"] .symbol`).click();
   await type(details.getByLabel('Bottom elevation'), '8 m');
-  await type(details.getByLabel('Liquid level'), '36 ft');
+  await type(details.getByLabel('Liquid surface elevation'), '36 ft');
   // a long discharge pipe, typed in feet
   const discharge = page.locator('g.pipe').nth(1);
   await discharge.locator('.hit').click({ force: true });

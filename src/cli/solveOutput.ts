@@ -32,7 +32,7 @@ const PUMP_COLUMNS: Column<PumpRow>[] = [
   { title: 'NPSHa/NPSHr', quantity: null, value: (r) => r.npshRatio, digits: 3 },
   { title: 'efficiency', quantity: 'fraction', value: (r) => r.efficiency },
   { title: 'shaft power', quantity: 'power', value: (r) => r.shaftPower },
-  { title: 'of BEP flow', quantity: 'fraction', value: (r) => r.bepFraction },
+  { title: 'of BEP flow', quantity: 'fraction', value: (r) => r.bepFraction ?? null },
 ];
 
 const CONTROL_VALVE_COLUMNS: Column<ControlValveRow>[] = [

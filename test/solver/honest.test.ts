@@ -182,3 +182,60 @@ describe('trivially solvable sheets converge with no flow', () => {
     expect(Math.abs(r.pipes.P1.flow)).toBeLessThan(1e-12);
   });
 });
+
+describe('impossible geometry is a stop naming the element and by how much', () => {
+  it('a vessel level below its bottom or above its top', () => {
+    const low = new Sheet();
+    low.vessel('T', -1, { z: 0, height: 5 });
+    const below = solve(low.doc).findings.find((f) => f.code === 'level-outside-vessel');
+    expect(below?.level).toBe('stop');
+    expect(below?.elements).toEqual(['T']);
+    expect(below?.message).toMatch(/below its bottom \(0\.00 m\) by 1\.00 m/);
+    const high = new Sheet();
+    high.vessel('T', 9, { z: 0, height: 5 });
+    expect(
+      solve(high.doc).findings.find((f) => f.code === 'level-outside-vessel')?.message,
+    ).toMatch(/above its top \(5\.00 m\) by 4\.00 m/);
+  });
+
+  it('a nozzle outside the shell', () => {
+    const s = new Sheet();
+    s.vessel('T', 3, { z: 0, height: 5, nozzleZ: 7 });
+    const f = solve(s.doc).findings.find((x) => x.code === 'nozzle-outside-vessel');
+    expect(f?.elements).toEqual(['T']);
+    expect(f?.message).toMatch(/nozzle N1 at 7\.00 m .*2\.00 m above the top/);
+  });
+
+  it('a 4 m pipe spanning a 9.5 m rise says it is 5.5 m too short', () => {
+    const s = new Sheet();
+    s.vessel('A', 2);
+    s.node('junction', 'J', { z: 9.5 });
+    s.pipe('P1', at('A', 'N1'), at('J', 'hub'), { length: 4 });
+    const f = solve(s.doc).findings.find((x) => x.code === 'pipe-shorter-than-rise');
+    expect(f?.level).toBe('stop');
+    expect(f?.elements).toEqual(['P1']);
+    expect(f?.message).toMatch(/length 4\.00 m .* 9\.50 m .* 5\.50 m too short/);
+  });
+});
+
+describe('a flat efficiency curve has no best-efficiency flow', () => {
+  for (const [what, curve] of [
+    ['one point', [{ flow: 0.01, value: 0.7 }]],
+    [
+      'all equal',
+      [
+        { flow: 0.005, value: 0.7 },
+        { flow: 0.01, value: 0.7 },
+        { flow: 0.02, value: 0.7 },
+      ],
+    ],
+  ] as const) {
+    it(`${what}: no % of BEP and no off-BEP finding`, () => {
+      const s = pumpLine({ efficiencyCurve: [...curve] }, { fittingType: 'gate-valve' });
+      const r = solve(s.doc);
+      expect(r.converged).toBe(true);
+      expect(r.pumps.P.bepFraction).toBeUndefined();
+      expect(codes(r)).not.toContain('pump-off-bep');
+    });
+  }
+});

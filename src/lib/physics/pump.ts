@@ -152,19 +152,32 @@ export function pumpEfficiency(fit: PumpFit, flow: number, speedRatio: number): 
 /**
  * Flow of best efficiency, m³/s, at speed ratio s: the maximum of the fitted efficiency curve
  * within the points' flow range (the vertex of a downward quadratic if it lies inside,
- * otherwise the better end), scaled by Q ∝ N. Null for an empty fit.
+ * otherwise the better end), scaled by Q ∝ N. Null for an empty fit and for a flat one (one
+ * point, or all equal: no flow is better than another).
  */
 export function bestEfficiencyFlow(effFit: PumpFit, speedRatio: number): number | null {
-  if (effFit.form === 'empty' || effFit.flowRange === null) return null;
+  if (effFit.form === 'empty' || effFit.form === 'constant' || effFit.flowRange === null)
+    return null;
   const { min, max } = effFit.flowRange;
   const [, c1, c2] = effFit.coefficients;
-  let best = atRated(effFit, min) >= atRated(effFit, max) ? min : max;
+  const atMin = atRated(effFit, min);
+  const atMax = atRated(effFit, max);
+  let best = atMin >= atMax ? min : max;
+  let peak = Math.max(atMin, atMax);
   if (effFit.form === 'quadratic' && c2 < 0) {
     const vertex = -c1 / (2 * c2);
-    if (vertex > min && vertex < max) best = vertex;
+    if (vertex > min && vertex < max) {
+      best = vertex;
+      peak = atRated(effFit, vertex);
+    }
   }
+  // A flat curve (points all equal, fitted to rounding) has no best-efficiency flow.
+  if (!(peak - Math.min(atMin, atMax) > FLAT_EFFICIENCY)) return null;
   return best * speedRatio;
 }
+
+/** Spread of efficiency over the tested range below which a curve is flat (no BEP), fraction. */
+export const FLAT_EFFICIENCY = 1e-9;
 
 /**
  * Shaft power, W: P = ρ·g·Q·H / η (hydraulic power over pump efficiency; e.g. Karassik et al.,

@@ -264,15 +264,16 @@ function pumpResult(
       : 0;
   const power = efficiency > 0 ? shaftPower(fluid.density, q, head, efficiency) : 0;
   const bep = info.running ? bestEfficiencyFlow(info.efficiencyFit, s) : null;
-  return {
-    flow: flow,
-    head: head,
-    npshAvailable: npshAvailable,
-    npshRequired: npshRequired,
+  const result: PumpResult = {
+    flow,
+    head,
+    npshAvailable,
+    npshRequired,
     npshMargin: npshAvailable - npshRequired,
     npshRatio: npshRequired > 0 ? npshAvailable / npshRequired : 0,
     efficiency,
     shaftPower: power,
-    bepFraction: bep !== null && bep > 0 ? q / bep : 0,
   };
+  if (bep !== null && bep > 0) result.bepFraction = q / bep;
+  return result;
 }

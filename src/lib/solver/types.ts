@@ -92,8 +92,11 @@ export interface PumpResult {
   efficiency: number;
   /** Shaft power, W. */
   shaftPower: number;
-  /** Flow as a fraction of best-efficiency flow (at running speed). */
-  bepFraction: number;
+  /**
+   * Flow as a fraction of best-efficiency flow (at running speed); absent when the pump has no
+   * best-efficiency flow (stopped, no efficiency curve, or a flat one: one point or all equal).
+   */
+  bepFraction?: number;
 }
 
 export interface ControlValveResult {

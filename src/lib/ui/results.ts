@@ -3,7 +3,7 @@
  * project's units. Pure functions.
  */
 import { nodeLabel } from '../model/labels';
-import type { HeadrouteDocument, Id } from '../model/types';
+import type { HeadrouteDocument, Id, Vessel } from '../model/types';
 import type { Finding, FindingLevel, NodeResult, SolveResult } from '../solver/types';
 import { formatQuantity } from '../units/format';
 import type { UnitSystem } from '../units/quantities';
@@ -98,7 +98,10 @@ export function readoutLines(
   if (!Object.hasOwn(doc.nodes, id)) return lines;
   const node = doc.nodes[id];
   lines.push(['Elevation', f(node.z, 'elevation')]);
-  if (node.kind === 'vessel') lines.push(['Liquid level', f(node.liquidLevel, 'elevation')]);
+  if (node.kind === 'vessel') {
+    lines.push(['Liquid surface elevation', f(node.liquidLevel, 'elevation')]);
+    lines.push(['Depth above bottom', f(node.liquidLevel - node.z, 'length')]);
+  }
   const nr = result?.nodes[id];
   if (nr) {
     for (const [port, pr] of Object.entries(nr.ports)) {
@@ -121,6 +124,32 @@ export function readoutLines(
     if (cv.choked) lines.push(['Choked', cv.flowLimited ? 'flow held at the limit' : 'yes']);
   }
   return lines;
+}
+
+/** The liquid's depth above a vessel's bottom, for the details beside its surface elevation. */
+export function liquidDepthText(vessel: Vessel, system: UnitSystem): string {
+  const depth = vessel.liquidLevel - vessel.z;
+  if (!Number.isFinite(depth)) return '';
+  const text = formatQuantity(Math.abs(depth), 'length', system, { digits: 3 });
+  return depth < 0 ? `${text} below the vessel bottom` : `Depth ${text} above the vessel bottom`;
+}
+
+/**
+ * What the status line says of the solve: nothing to solve on an empty sheet, "solved" only
+ * when the solve converged and every part is joined to a head, else what is missing.
+ */
+export function solveStateText(
+  doc: HeadrouteDocument,
+  result: SolveResult | null,
+): { text: string; error: boolean } {
+  if (Object.keys(doc.nodes).length === 0)
+    return { text: 'empty sheet: add a vessel or a boundary', error: false };
+  if (!result) return { text: 'solving…', error: false };
+  const codes = new Set(result.findings.map((f) => f.code));
+  if (codes.has('no-fixed-head')) return { text: 'not solved: nothing holds a head', error: true };
+  if (!result.converged) return { text: 'not converged', error: true };
+  if (codes.has('cut-off')) return { text: 'solved in part: some parts not joined', error: true };
+  return { text: 'solved', error: false };
 }
 
 /** Short pressure text shown beside a node on the sheet (gauge, at its first port). */

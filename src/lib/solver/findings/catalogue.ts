@@ -23,6 +23,9 @@ export const FINDING_LEVELS = {
   'pump-curve-missing': 'stop',
   'nozzle-above-level': 'stop',
   'forced-flow': 'stop',
+  'level-outside-vessel': 'stop',
+  'nozzle-outside-vessel': 'stop',
+  'pipe-shorter-than-rise': 'stop',
   'non-finite-result': 'stop',
   'unconnected-port': 'caution',
   'npsh-margin-low': 'caution',
@@ -124,6 +127,41 @@ export function findingsIn(system: UnitSystem) {
         'blocked-in',
         `${list(names)} ${names.length === 1 ? 'is' : 'are'} shut in behind ${list(blockers)} with no flow: ${names.length === 1 ? 'its' : 'their'} pressure is not determined by the sheet, so none is shown and ${names.length === 1 ? 'it is' : 'they are'} left out of the checks.`,
         elements,
+      ),
+    /** A vessel's liquid surface below its bottom (`below`) or above its top. */
+    levelOutsideVessel: (
+      name: string,
+      level: number,
+      bottom: number,
+      top: number,
+      below: boolean,
+      id: Id,
+    ) =>
+      finding(
+        'level-outside-vessel',
+        `Vessel ${q(name)}: its liquid surface elevation ${u.elevation(level)} is ${below ? `below its bottom (${u.elevation(bottom)}) by ${u.head(bottom - level)}` : `above its top (${u.elevation(top)}) by ${u.head(level - top)}`}; a vessel cannot hold liquid there. Correct the liquid surface elevation, the vessel's elevation or its height.`,
+        [id],
+      ),
+    /** A vessel nozzle outside the shell (below the bottom or above the top). */
+    nozzleOutsideVessel: (
+      name: string,
+      nozzle: string,
+      nozzleZ: number,
+      bottom: number,
+      top: number,
+      id: Id,
+    ) =>
+      finding(
+        'nozzle-outside-vessel',
+        `Vessel ${q(name)}: nozzle ${nozzle} at ${u.elevation(nozzleZ)} is outside the shell (${u.elevation(bottom)} to ${u.elevation(top)}), ${nozzleZ < bottom ? `${u.head(bottom - nozzleZ)} below the bottom` : `${u.head(nozzleZ - top)} above the top`}. Move the nozzle onto the shell or correct the vessel's elevation or height.`,
+        [id],
+      ),
+    /** A pipe shorter than the straight-line rise between its ends. */
+    pipeShorterThanRise: (name: string, length: number, rise: number, id: Id) =>
+      finding(
+        'pipe-shorter-than-rise',
+        `Pipe ${q(name)}: its length ${u.head(length)} is less than the ${u.head(rise)} difference in elevation between its ends, ${u.head(rise - length)} too short. Lengthen it or correct the elevations of its ends.`,
+        [id],
       ),
     /** A result that came out as NaN or ±Infinity, with the input that drove it. */
     nonFiniteResult: (name: string, cause: string, elements: Id[]) =>

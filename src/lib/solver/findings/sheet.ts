@@ -13,6 +13,7 @@ import { portName } from '../network/portSlots';
 import type { ElementResults, IndexedResults } from '../results';
 import type { Finding } from '../types';
 import { findingsIn } from './catalogue';
+import { geometryFindings } from './geometry';
 import { nozzleLevelFindings } from './nozzleLevel';
 import { DISCHARGE, pipeService, SUCTION } from './service';
 
@@ -40,6 +41,7 @@ export function sheetFindings(
     );
   }
 
+  out.push(...geometryFindings(graph, findings));
   out.push(...nozzleLevelFindings(graph, indexed, findings));
 
   // Nodes: lowest port pressure against vapour pressure; a closed vessel's gas space too.
@@ -186,7 +188,9 @@ function pumpFindings(
         ),
       );
     }
+    // No best-efficiency flow (no curve, or a flat one): no fraction and no finding.
     if (
+      pump.bepFraction !== undefined &&
       pump.bepFraction > 0 &&
       (pump.bepFraction < BEP_BAND.min || pump.bepFraction > BEP_BAND.max)
     ) {

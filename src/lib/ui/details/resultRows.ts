@@ -176,7 +176,10 @@ export function pumpResultRows(
     },
     {
       label: 'Flow / best-efficiency flow',
-      value: Number.isFinite(p.bepFraction) ? `${Math.round(p.bepFraction * 100)} %` : '—',
+      value:
+        p.bepFraction !== undefined && Number.isFinite(p.bepFraction)
+          ? `${Math.round(p.bepFraction * 100)} %`
+          : '—',
       level: worst(bepFindings),
       note: bepFindings.length > 0 ? bepFindings.map((x) => x.message).join(' ') : undefined,
     },
