@@ -68,7 +68,9 @@ describe('details results', () => {
     expect(value(rows, 'Shaft power')).toMatch(/kW$/);
     expect(value(rows, 'NPSH available')).toBe(`${Number(p.npshAvailable.toPrecision(3))} m`);
     expect(value(rows, 'NPSH margin')).toMatch(/ratio/);
-    expect(value(rows, 'Flow / best-efficiency flow')).toBe(`${Math.round(p.bepFraction! * 100)} %`);
+    expect(value(rows, 'Flow / best-efficiency flow')).toBe(
+      `${Math.round(p.bepFraction! * 100)} %`,
+    );
   });
 
   it('a control valve shows its opening, drop, flow coefficient and choking', () => {
