@@ -93,8 +93,10 @@ describe('R. Mackay, The Practical Pumping Handbook, 4.4.2.5 "Sample NPSHA calcu
       ['E2', 'elbow-90-standard', 0.29],
       ['GV2', 'gate-valve', 0.11],
     ] as const;
+    // The first valve sits 1 m up, so no run climbs more than its own length (the book's
+    // suction figures do not depend on where along the line the fittings sit).
     for (const [id, type, k] of fittings) {
-      s.fitting(id, { fittingType: type, lossMethod: 'fixed', fixedK: k, z: 0 });
+      s.fitting(id, { fittingType: type, lossMethod: 'fixed', fixedK: k, z: id === 'GV1' ? 1 : 0 });
     }
     // 25 ft of 6-inch pipe in five runs between the tank, the four fittings and the pump.
     const run = { length: suctionLength / 5, diameter, roughness };

@@ -38,8 +38,8 @@ import type { Finding, SolveResult } from './types';
 
 /**
  * Findings about parts not joined to a fixed head wait until the part is joined: the 'cut-off'
- * or 'blocked-in' finding names those elements once, and remarks on their open ports are
- * dropped.
+ * or 'blocked-in' finding names those elements once, and remarks on their open ports and
+ * pipe lengths are dropped.
  */
 function withoutLooseRemarks(all: Finding[]): Finding[] {
   const loose = new Set(
@@ -47,7 +47,9 @@ function withoutLooseRemarks(all: Finding[]): Finding[] {
   );
   if (loose.size === 0) return all;
   return all.filter(
-    (f) => f.code !== 'unconnected-port' || !f.elements.every((id) => loose.has(id)),
+    (f) =>
+      (f.code !== 'unconnected-port' && f.code !== 'pipe-shorter-than-rise') ||
+      !f.elements.every((id) => loose.has(id)),
   );
 }
 
