@@ -8,6 +8,7 @@ import { processIo, type CliIo } from './io';
 import { profileCommand } from './profileCommand';
 import { REVIEW_HELP, reviewCommand } from './review';
 import { solveCommand } from './solveCommand';
+import { SURGE_HELP, surgeCommand } from './surgeCommand';
 
 /** The text of `headroute --help`. */
 export const HELP = `headroute — solve Headroute project files (*.headroute.json) from the command line
@@ -33,11 +34,12 @@ Usage:
       --segments N    pieces each pipe is cut into (default 10)
 
 ${REVIEW_HELP}
+${SURGE_HELP}
   headroute --help | --version
 
 Exit codes:
   0   done
-  1   --strict and at least one stop finding
+  1   --strict and at least one stop finding; surge: the run could not be made
   2   bad command line, or a case, node or route the project does not have
   3   the project file is missing, unreadable or not a valid project
   4   no pipes join the nodes asked for, so there is no profile
@@ -68,6 +70,7 @@ export async function main(argv: readonly string[], io: CliIo = processIo): Prom
     if (command === 'solve') return await solveCommand(rest, io);
     if (command === 'profile') return await profileCommand(rest, io);
     if (command === 'review') return await reviewCommand(rest, io);
+    if (command === 'surge') return await surgeCommand(rest, io);
     throw new CliError(`Unknown command “${command}”. See headroute --help.`, EXIT.usage);
   } catch (error) {
     if (error instanceof CliError) {

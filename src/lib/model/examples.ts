@@ -19,6 +19,11 @@
  *   V-302, 18.6 m³/h to V-303 (its top inlet at 5.5 m discharges into the gas space above the
  *   liquid at 4 m) and 6.3 m³/h back through RO-301 (12 mm bore in 1-1/2", permanent loss
  *   K ≈ 320 by ISO 5167-2 eq. (5) with C = 0.61).
+ * - pump-trip-over-rack: water at 20 °C, P-401 gives about 30.8 m³/h at 19.2 m (BEP 30 m³/h)
+ *   from a feed tank at level 2.5 m into a head tank at 15 m through 147 m of 3" over a rack
+ *   whose high point (+17 m) holds only about 6 kPa(g) in steady flow. A trip of P-401 (Joukowsky
+ *   a·Δv/g ≈ 252 m against ≈ 19 m of pump head) pulls the rack down to vapour pressure and the
+ *   column parts from the riser top along the rack (see `headroute surge … --trip P1`).
  */
 import type { ParseResult } from './file/parse';
 import { parseProjectFile } from './file/parse';
@@ -50,6 +55,12 @@ export const EXAMPLES: readonly ExampleProject[] = [
     title: 'Branched feed with minimum-flow return',
     summary:
       'One pump feeding an elevated head tank and a pressurised receiver through a header, with a minimum-flow line back to the source through a restriction orifice.',
+  },
+  {
+    file: 'pump-trip-over-rack.headroute.json',
+    title: 'Pump trip over a rack high point',
+    summary:
+      'Water pumped over a +17 m rack high point into a head tank; the surge panel shows what a pump trip or a fast valve closure does: the column parts along the rack after a trip.',
   },
 ];
 

@@ -27,6 +27,8 @@ export const FINDING_LEVELS = {
   'nozzle-outside-vessel': 'stop',
   'pipe-shorter-than-rise': 'stop',
   'non-finite-result': 'stop',
+  'surge-cannot-run': 'stop',
+  'surge-above-design-pressure': 'stop',
   'unconnected-port': 'caution',
   'npsh-margin-low': 'caution',
   vacuum: 'caution',
@@ -36,12 +38,18 @@ export const FINDING_LEVELS = {
   'pump-at-shutoff': 'caution',
   'property-extrapolated': 'caution',
   'unknown-case': 'caution',
+  'surge-column-separation': 'caution',
+  'surge-assumption': 'caution',
   'laminar-flow': 'note',
   'transitional-flow': 'note',
   'reversed-flow': 'note',
   'non-return-closed': 'note',
   'npshr-curve-missing': 'note',
   'blocked-in': 'note',
+  'surge-closure-time': 'note',
+  'surge-peak-pressure': 'note',
+  'surge-wave-speed-adjusted': 'note',
+  'surge-not-modelled': 'note',
 } as const satisfies Record<string, FindingLevel>;
 
 /** A stable finding code. */
