@@ -16,7 +16,6 @@ function demo(): HeadrouteDocument {
 }
 
 const peak = (r: ReturnType<typeof runSurge>) => Math.max(...r.envelope.map((p) => p.hglMax));
-const low = (r: ReturnType<typeof runSurge>) => Math.min(...r.envelope.map((p) => p.hglMin));
 
 describe('surge runs on the pump-trip-over-rack demo', () => {
   const doc = demo();

@@ -12,7 +12,7 @@
  *   checked against a printed table: each is marked so and taken as uncertain by ±3 %.
  * - A user-defined liquid has no bulk modulus: the caller must say so (no number is made up).
  */
-import type { LiquidChoice } from '../../model/types';
+import type { LiquidChoice } from '../liquids/liquidChoice';
 import { region1Properties } from '../water';
 
 /** A bulk modulus and where it came from. */
