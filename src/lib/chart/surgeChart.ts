@@ -202,47 +202,52 @@ export function surgeEnvelopeSvg(run: SurgeResult, options: SurgeChartOptions = 
   return f.svg.join('\n');
 }
 
-/** Head (and the section's steady head) against time at one traced section. */
+/** Head (with the vapour line) or flow (m³/h) against time at one traced section. */
 export function surgeTimeSvg(
   run: SurgeResult,
   trace: number,
-  options: SurgeChartOptions = {},
+  options: SurgeChartOptions & { quantity?: 'head' | 'flow' } = {},
 ): string {
   const width = options.width ?? 900;
   const height = options.height ?? 360;
+  const quantity = options.quantity ?? 'head';
   const t = run.traces[trace];
-  const title = options.title ?? 'Head against time';
+  const title = options.title ?? (quantity === 'head' ? 'Head against time' : 'Flow against time');
+  const yLabel = quantity === 'head' ? 'HGL (m)' : 'flow (m³/h)';
   if (!run.ok || !t) {
     const f = frame([0, 1], [0, 1], width, height, {
       x: 'time (s)',
-      y: 'HGL (m)',
+      y: yLabel,
       title: `${title} — not run`,
     });
     return [...f.svg, '</svg>'].join('\n');
   }
+  const end = run.times[run.times.length - 1] || 1;
+  const values = quantity === 'head' ? t.head : t.flow.map((q) => q * 3600);
   const point = run.envelope.find((p) => p.chainage === t.chainage);
-  const vap = point?.vapourLine ?? Math.min(...t.head);
-  const f = frame(
-    [0, run.times[run.times.length - 1] || 1],
-    [Math.min(...t.head, vap), Math.max(...t.head)],
+  const vap = quantity === 'head' ? (point?.vapourLine ?? Math.min(...values)) : 0;
+  const f = frame([0, end], [Math.min(...values, vap), Math.max(...values, vap)], width, height, {
+    x: 'time (s)',
+    y: yLabel,
+    title,
+  });
+  const refColour = quantity === 'head' ? SURGE_COLOURS.vapour : SURGE_COLOURS.grid;
+  f.svg.push(
+    `<path d="${path(f, [0, end], [vap, vap])}" fill="none" stroke="${refColour}" stroke-dasharray="6 4"/>`,
+  );
+  f.svg.push(
+    `<path d="${path(f, run.times, values)}" fill="none" stroke="${SURGE_COLOURS.steady}" stroke-width="1.5"/>`,
+  );
+  legend(
+    f,
     width,
-    height,
-    {
-      x: 'time (s)',
-      y: 'HGL (m)',
-      title,
-    },
+    quantity === 'head'
+      ? [
+          ['HGL', SURGE_COLOURS.steady],
+          ['vapour line', SURGE_COLOURS.vapour, '6 4'],
+        ]
+      : [['flow', SURGE_COLOURS.steady]],
   );
-  f.svg.push(
-    `<path d="${path(f, [0, run.times[run.times.length - 1]], [vap, vap])}" fill="none" stroke="${SURGE_COLOURS.vapour}" stroke-dasharray="6 4"/>`,
-  );
-  f.svg.push(
-    `<path d="${path(f, run.times, t.head)}" fill="none" stroke="${SURGE_COLOURS.steady}" stroke-width="1.5"/>`,
-  );
-  legend(f, width, [
-    ['HGL', SURGE_COLOURS.steady],
-    ['vapour line', SURGE_COLOURS.vapour, '6 4'],
-  ]);
   f.svg.push('</svg>');
   return f.svg.join('\n');
 }

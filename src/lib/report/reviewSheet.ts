@@ -4,6 +4,8 @@
  * each stored route's profile, element tables, findings, the cases side by side, the methods
  * and sources, and the caution.
  */
+import { surgeSectionHtml } from './surgeSection';
+import type { SurgeResult } from '../solver/surge/types';
 import { SCREENING_CAUTION } from '../chart/exportMeta';
 import { profileSvg } from '../chart/profileSvg';
 import type { HeadrouteDocument, Id } from '../model/types';
@@ -38,6 +40,8 @@ export interface ReviewSheetOptions {
   date?: Date;
   /** A comparison already computed for this document (saves solving every case again). */
   comparison?: CaseComparison;
+  /** A surge run of this document to show with its event (absent: the section says none). */
+  surge?: SurgeResult;
 }
 
 /** The full caution of the review sheet (the exports' caution line, spelt out). */
@@ -264,6 +268,7 @@ export function reviewSheetHtml(doc: HeadrouteDocument, options: ReviewSheetOpti
         ...otherCases,
       ].join('\n'),
     ),
+    sectionHtml('surge', 'Surge screening', surgeSectionHtml(doc, options.surge, system)),
     sectionHtml('comparison', 'Cases compared', comparisonTableHtml(comparison, system)),
     sectionHtml(
       'elements',

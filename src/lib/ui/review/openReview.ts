@@ -6,6 +6,7 @@
 import type { HeadrouteDocument, Id } from '../../model/types';
 import { reviewSheetHtml } from '../../report/reviewSheet';
 import type { CaseComparison } from '../../solver/compareCases';
+import { surge } from '../surge/surgeState.svelte';
 
 /** The review sheet HTML for the app's document and shown case. */
 export function reviewHtml(
@@ -13,7 +14,12 @@ export function reviewHtml(
   caseId: Id | null,
   comparison?: CaseComparison,
 ): string {
-  return reviewSheetHtml(doc, { caseId, comparison });
+  // The surge run shown in the app goes on the sheet when it was run on this document and case.
+  const run =
+    surge.result && surge.ranOn === doc && surge.result.caseId === caseId
+      ? surge.result
+      : undefined;
+  return reviewSheetHtml(doc, { caseId, comparison, surge: run });
 }
 
 /**
