@@ -40,10 +40,10 @@ test('a pump trip parts the column on the rack; a fast closure; exports and revi
   await panel.getByLabel('Surge event').selectOption('close');
   await panel.getByLabel('Element of the event').selectOption({ label: 'HV-402' });
   await panel.getByLabel('Closure time, s').fill('0');
-  await expect(panel.getByRole('list', { name: 'Surge findings' })).toContainText(
-    'above its design pressure',
-    { timeout: 60_000 },
-  );
+  const findings = panel.getByRole('list', { name: 'Surge findings' });
+  await expect(findings).toContainText('closing “HV-402” in 0.00 s', { timeout: 60_000 });
+  await expect(findings).toContainText('above its design pressure');
+  await expect(panel.getByRole('status')).not.toContainText('running');
   await page.screenshot({ path: `${SHOTS}/surge-close.png` });
 
   const download = page.waitForEvent('download');

@@ -8,7 +8,7 @@ import { processIo, type CliIo } from './io';
 import { profileCommand } from './profileCommand';
 import { REVIEW_HELP, reviewCommand } from './review';
 import { solveCommand } from './solveCommand';
-import { SURGE_HELP, surgeCommand } from './surgeCommand';
+import { SURGE_HELP } from './surgeHelp';
 
 /** The text of `headroute --help`. */
 export const HELP = `headroute — solve Headroute project files (*.headroute.json) from the command line
@@ -70,7 +70,8 @@ export async function main(argv: readonly string[], io: CliIo = processIo): Prom
     if (command === 'solve') return await solveCommand(rest, io);
     if (command === 'profile') return await profileCommand(rest, io);
     if (command === 'review') return await reviewCommand(rest, io);
-    if (command === 'surge') return await surgeCommand(rest, io);
+    // Loaded only when asked for, so the other commands start as quickly as before.
+    if (command === 'surge') return await (await import('./surgeCommand')).surgeCommand(rest, io);
     throw new CliError(`Unknown command “${command}”. See headroute --help.`, EXIT.usage);
   } catch (error) {
     if (error instanceof CliError) {
