@@ -12,5 +12,6 @@ export default defineConfig({
     // Generous: the big-mesh and hostile-file tests take 1-5 s on a quiet 2-core machine and
     // several times that while other work shares it. Time is measured by the bench, never here.
     testTimeout: 60_000,
+    globalSetup: ['test/globalSetup.ts'],
   },
 });
