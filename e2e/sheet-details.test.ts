@@ -65,7 +65,7 @@ test('details: keyboard only, place a valve and set its loss coefficient', async
 test('details: pump curve table and chart', async ({ page }) => {
   await page.locator('g.node[data-kind="pump"] .symbol').click();
   const details = page.getByRole('region', { name: 'Details' });
-  await expect(details.getByRole('img', { name: /Pump curve/ })).toBeVisible();
+  await expect(details.getByRole('img', { name: /Pump head curve/ })).toBeVisible();
   await expect(details.locator('circle.operating')).toHaveCount(1);
   const firstHead = details.getByLabel('Head curve at rated speed row 1 Head, m');
   const before = await firstHead.inputValue();
