@@ -103,6 +103,8 @@ export default ts.config(
       'node_modules/',
       'test-results/',
       'playwright-report/',
+      'reports/',
+      '.stryker-tmp/',
     ],
   },
 );

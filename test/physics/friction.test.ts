@@ -92,18 +92,25 @@ describe('colebrookWhite', () => {
     }
   });
 
-  // Readings of the Moody chart (Moody 1944, Trans. ASME 66, Fig. 1), to the chart's
-  // readability of about 2–3 %. The readings are from memory of the chart.
+  // Readings of the Moody chart (Moody 1944, Trans. ASME 66, Fig. 1). The readings are from
+  // memory of the chart. The band is the chart's readability: on its logarithmic f axis the
+  // minor divisions are 0.001 apart near f = 0.02, so half a division is about 2.5 %, and a
+  // careful reading is good to about a third of a division; 1.5 % is used. (At 3 % the
+  // ε/D = 1e-4 reading, 0.0185, passed for ε/D = 2e-4, where Colebrook gives 0.0190.)
   it.each([
     { re: 1e5, rr: 0, f: 0.018, note: 'smooth pipe, Re = 1e5' },
     { re: 1e6, rr: 0, f: 0.0116, note: 'smooth pipe, Re = 1e6' },
     { re: 1e6, rr: 0.001, f: 0.02, note: 'ε/D = 0.001, Re = 1e6' },
-    { re: 1e5, rr: 0.0002, f: 0.0185, note: 'ε/D = 0.0002, Re = 1e5' },
+    { re: 1e5, rr: 0.0002, f: 0.019, note: 'ε/D = 0.0002, Re = 1e5' },
+    { re: 1e5, rr: 0.0001, f: 0.0185, note: 'ε/D = 0.0001, Re = 1e5' },
     { re: 1e8, rr: 0.01, f: 0.038, note: 'ε/D = 0.01, fully rough' },
     { re: 1e8, rr: 0.05, f: 0.072, note: 'ε/D = 0.05, fully rough' },
-  ])('reads the Moody chart within 3 %: $note (Moody 1944 chart, from memory)', ({ re, rr, f }) => {
-    expect(relativeError(colebrookWhite(re, rr), f)).toBeLessThan(0.03);
-  });
+  ])(
+    'reads the Moody chart within 1.5 %: $note (Moody 1944 chart, from memory)',
+    ({ re, rr, f }) => {
+      expect(relativeError(colebrookWhite(re, rr), f)).toBeLessThan(0.015);
+    },
+  );
 
   it('reaches the von Kármán fully rough limit at Re = ∞ (Colebrook 1939 with Re → ∞)', () => {
     expect(colebrookWhite(Infinity, 0.01)).toBeCloseTo((2 * Math.log10(0.01 / 3.7)) ** -2, 14);

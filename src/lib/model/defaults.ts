@@ -9,6 +9,7 @@
  * defaults that would read as 32.81 ft or 9.843 ft. Inside they are SI like everything else.
  */
 import { CURRENT_VERSION } from './file/version';
+import { ENTRANCE_K, EXIT_K } from '../physics/fittings/entranceExit';
 import type { UnitSystem } from '../units/quantities';
 import type {
   Boundary,
@@ -174,8 +175,8 @@ export function createNode(
         height: d.vesselHeight,
         nozzles: [
           // Entrance K 0.5 (sharp-edged) and exit K 1.0: common handbook values, from memory.
-          { id: 'N1', z: d.outletZ, entranceK: 0.5, exitK: 1 },
-          { id: 'N2', z: d.inletZ, entranceK: 0.5, exitK: 1 },
+          { id: 'N1', z: d.outletZ, entranceK: ENTRANCE_K, exitK: EXIT_K },
+          { id: 'N2', z: d.inletZ, entranceK: ENTRANCE_K, exitK: EXIT_K },
         ],
       } satisfies Vessel;
     case 'pump':

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { FittingType } from '../../../src/lib/model/types';
+import { createNode } from '../../../src/lib/model/defaults';
+import type { FittingType, Vessel } from '../../../src/lib/model/types';
 import {
   DARBY_3K,
   darby3K,
@@ -93,5 +94,11 @@ describe('entrance and exit', () => {
   it('uses K = 0.5 for a square-edged entrance and K = 1.0 for an exit (Crane TP-410 — from memory)', () => {
     expect(ENTRANCE_K).toBe(0.5);
     expect(EXIT_K).toBe(1.0);
+  });
+
+  it('are the K of a new vessel’s nozzles (model defaults use them)', () => {
+    const vessel = createNode('vessel', { x: 0, y: 0 }, 'V') as Vessel;
+    expect(vessel.nozzles.length).toBeGreaterThan(0);
+    for (const n of vessel.nozzles) expect([n.entranceK, n.exitK]).toEqual([ENTRANCE_K, EXIT_K]);
   });
 });

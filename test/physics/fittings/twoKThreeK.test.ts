@@ -79,3 +79,59 @@ describe('Darby 3-K method (Darby, Chem. Eng., April 2001)', () => {
     expect(HOOPER_2K['swing-check-valve']).toMatchObject({ k1: 1500, kInfinity: 1.5 });
   });
 });
+
+/**
+ * Every row Headroute uses, against a transcription of the papers' tables: the `Hooper` and
+ * `Darby` dictionaries of the `fluids` library as Debian ships it (python3-fluids 1.0.22,
+ * fluids/fittings.py), which transcribe Hooper (1981) Table 1 and Darby (2001) Table 1. The
+ * numbers below were read from that package, not from this project's code.
+ */
+describe('each Hooper and Darby row against the python3-fluids 1.0.22 transcription', () => {
+  const hooper: Array<[keyof typeof HOOPER_2K, string, number, number]> = [
+    ['elbow-90-standard', 'Elbow, 90°, Standard (R/D = 1), Flanged/welded', 800, 0.25],
+    ['elbow-90-long-radius', 'Elbow, 90°, Long-radius (R/D = 1.5), All types', 800, 0.2],
+    ['elbow-45-standard', 'Elbow, 45°, Standard (R/D = 1), All types', 500, 0.2],
+    ['elbow-45-long-radius', 'Elbow, 45°, Long-radius (R/D 1.5), All types', 500, 0.15],
+    ['tee-run', 'Tee, Through, Flanged or welded', 150, 0.05],
+    ['tee-branch', 'Elbow, Elbow, Standard, Flanged/welded (tee used as elbow)', 800, 0.8],
+    ['gate-valve', 'Valve, Gate, Full line size, Beta = 1', 300, 0.1],
+    ['ball-valve', 'Valve, Gate, Full line size, Beta = 1 (gate, ball, plug row)', 300, 0.1],
+    ['globe-valve', 'Valve, Globe, Standard', 1500, 4.0],
+    ['butterfly-valve', 'Valve, Butterfly,', 800, 0.25],
+    ['swing-check-valve', 'Valve, Check, Swing', 1500, 1.5],
+    ['lift-check-valve', 'Valve, Check, Lift', 2000, 10.0],
+  ];
+  it.each(hooper)('Hooper %s: %s (K1 = %d, K∞ = %d)', (type, _row, k1, kInfinity) => {
+    expect(HOOPER_2K[type]).toMatchObject({ k1, kInfinity });
+  });
+
+  const darby: Array<[keyof typeof DARBY_3K, string, number, number, number]> = [
+    ['elbow-90-standard', 'Elbow, 90°, flanged, welded, bends, (r/D = 1)', 800, 0.091, 4.0],
+    ['elbow-90-long-radius', 'Elbow, 90°, threaded, long radius, (r/D = 1.5)', 800, 0.071, 4.2],
+    ['elbow-45-standard', 'Elbow, 45°, threaded standard, (r/D = 1)', 500, 0.071, 4.2],
+    ['elbow-45-long-radius', 'Elbow, 45°, long radius, (r/D = 1.5)', 500, 0.052, 4.0],
+    ['tee-run', 'Tee, Run-through, flanged, (r/D = 1)', 150, 0.05, 4.0],
+    ['tee-branch', 'Tee, Through-branch, (as elbow), flanged, (r/D = 1)', 800, 0.28, 4.0],
+    ['gate-valve', 'Valve, Gate valve, standard, β = 1', 300, 0.037, 3.9],
+    ['ball-valve', 'Valve, Ball valve, standard, β = 1', 300, 0.017, 3.5],
+    ['globe-valve', 'Valve, Globe valve, standard, β = 1', 1500, 1.7, 3.6],
+    ['swing-check-valve', 'Valve, Swing check', 1500, 0.46, 4.0],
+    ['lift-check-valve', 'Valve, Lift check', 2000, 2.85, 3.8],
+  ];
+  it.each(darby)('Darby %s: %s (K1 = %d, Ki = %d, Kd = %d)', (type, _row, k1, ki, kd) => {
+    expect(DARBY_3K[type]).toMatchObject({ k1, ki, kd });
+  });
+
+  it('Darby tee run-through at Re = 1e5 in 4" (python3-fluids 1.0.22 Darby3K gives 0.18345079108)', () => {
+    // fluids.fittings.Darby3K(NPS=4, Re=1e5, name='Tee, Run-through, flanged, (r/D = 1)').
+    expect(darby3K(DARBY_3K['tee-run']!, 1e5, 4 * METRES_PER_INCH)).toBeCloseTo(
+      0.18345079107728943,
+      10,
+    );
+  });
+
+  it('Darby has no butterfly valve row; Hooper has every type Darby has', () => {
+    expect(DARBY_3K['butterfly-valve']).toBeUndefined();
+    for (const type of Object.keys(DARBY_3K)) expect(HOOPER_2K[type as never]).toBeDefined();
+  });
+});

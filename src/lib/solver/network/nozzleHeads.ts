@@ -16,6 +16,7 @@
  * the flow is not physical (findings/nozzleLevel.ts).
  */
 import type { Boundary, Nozzle, Vessel } from '../../model/types';
+import { EXIT_K } from '../../physics/fittings/entranceExit';
 
 /** (p_gas − p_atm)/ρg of a vessel's gas space, m: 0 when it is open to the atmosphere. */
 export function vesselGasHead(vessel: Vessel, atmosphericPressure: number, rhoG: number): number {
@@ -74,5 +75,5 @@ export function gasSpaceHead(nozzle: Nozzle, gasHead: number): number {
  * gas pressure, which a free jet cannot, so it counts as 1. The entrance K is kept as typed.
  */
 export function freeDischargeEnd(nozzle: Nozzle): { entranceK: number; exitK: number } {
-  return { entranceK: nozzle.entranceK, exitK: Math.max(1, nozzle.exitK) };
+  return { entranceK: nozzle.entranceK, exitK: Math.max(EXIT_K, nozzle.exitK) };
 }

@@ -4,6 +4,7 @@
  * text. A sheet node's ports take consecutive slots in the order of model/ports `portsOf`.
  */
 import type { SheetNode } from '../../model/types';
+import { EXIT_K } from '../../physics/fittings/entranceExit';
 import { freeDischargeEnd, isAboveLevel } from './nozzleHeads';
 
 /** Port names of the fixed-port kinds, in `portsOf` order (shared, never changed). */
@@ -100,7 +101,7 @@ export function endCoefficients(
 }
 
 /** A boundary as a pipe end: no entrance loss, the velocity head lost on exit. */
-const BOUNDARY_END = { entranceK: 0, exitK: 1 } as const;
+const BOUNDARY_END = { entranceK: 0, exitK: EXIT_K } as const;
 
 const BOTH: readonly number[] = [0, 1];
 const FIRST: readonly number[] = [0];

@@ -28,8 +28,13 @@ export const OXYGENATES: readonly LibraryLiquid[] = [
     casNumber: '67-56-1',
     normalBoilingPoint: 337.75,
     ...crc,
-    criticalPressure: 8.01e6,
-    ...crcPc,
+    // 8.084 MPa: CRC Handbook, 'Critical Constants of Organic Compounds' (from memory; the
+    // transcription's 8.01 MPa was 1.7 % below Perry's Table 2-8 row at its Tmax = Tc, 8.145
+    // MPa, and below every handbook value remembered, 8.08–8.10 MPa).
+    criticalPressure: 8.084e6,
+    criticalPressureSource:
+      "CRC Handbook of Chemistry and Physics, table 'Critical Constants of Organic Compounds' " +
+      '(from memory: 8.084 MPa; the transcription gave 8.01 MPa)',
     vapourPressure: perryVapourPressure([82.718, -6904.5, -8.8622, 7.4664e-6, 2], 175.47, 512.5),
     density: perryDensity([2.3267, 0.27073, 512.5, 0.24713], 32.042, 175.47, 512.5),
     viscosity: perryViscosity([-25.317, 1789.2, 2.069, 0, 0], 175.47, 337.85),
