@@ -8,6 +8,7 @@ import { formatQuantity, type UnitSystem } from '../units';
 import { estimateTextWidth, placeInLanes } from './labelLanes';
 import type { MarkedSpan } from './markedSpans';
 import type { NodePlace } from './profileMarks';
+import { MIN_SPAN_PX } from './profileStyle';
 import type { ElementLabel, NpshNote, PlacedSpan, ProfileGeometry } from './profileTypes';
 
 /** Line height of label text, as a multiple of the font size. */
@@ -53,10 +54,19 @@ export function placeSpans(
     ...s,
     x0: x(s.start),
     x1: x(s.end),
+    ...drawnWidth(x(s.start), x(s.end)),
+    markX: x(s.minChainage),
     text: texts[i],
     labelX: lanes[i].centre,
     lane: lanes[i].lane,
   }));
+}
+
+/** A span's drawn ends: its own, or MIN_SPAN_PX about its centre when it is narrower. */
+export function drawnWidth(x0: number, x1: number): { drawX0: number; drawX1: number } {
+  if (x1 - x0 >= MIN_SPAN_PX) return { drawX0: x0, drawX1: x1 };
+  const centre = (x0 + x1) / 2;
+  return { drawX0: centre - MIN_SPAN_PX / 2, drawX1: centre + MIN_SPAN_PX / 2 };
 }
 
 function clampX(px: number, plot: ProfileGeometry['plot']): number {

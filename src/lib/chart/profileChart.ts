@@ -126,10 +126,10 @@ export function profileGeometry(
     ...l,
     y: axisY + 44 + lane * lineHeight,
   }));
-  const spans: PlacedSpan[] = spanDraft.map(({ lane, ...s }) => ({
-    ...s,
-    labelY: plot.top - 6 - lane * lineHeight,
-  }));
+  // Vacuum spans first, so each span below vapour pressure is drawn over them, not mixed in.
+  const spans: PlacedSpan[] = spanDraft
+    .map(({ lane, ...s }) => ({ ...s, labelY: plot.top - 6 - lane * lineHeight }))
+    .sort((a, b) => (a.level === 'stop' ? 1 : 0) - (b.level === 'stop' ? 1 : 0));
   const topNotes = noteDraft.map((n) => ({
     ...n,
     y: plot.top - 6 - (spanLanes + n.lane) * lineHeight,

@@ -23,6 +23,12 @@ export const PROFILE_LINES: Record<ProfileLineKey, LineStyle> = {
   level: { stroke: '#4f86ad', width: 2, dash: '' },
 };
 
+/**
+ * Least drawn width of a marked span, px: narrower spans are widened about their centre and
+ * get a marker at their smallest margin, so a short span on a long route cannot be missed.
+ */
+export const MIN_SPAN_PX = 8;
+
 /** Inks for text, frames and the two marked-span levels (ink and a soft background). */
 export const PROFILE_INK = {
   text: '#1d2521',

@@ -124,15 +124,31 @@ function chart(g: ProfileGeometry): string {
   out.push(`</g>`);
 
   out.push(`<g clip-path="url(#hr-chart-clip)">`);
+  // Vacuum spans come first in g.spans: each span below vapour pressure is drawn over them,
+  // opaque and outlined, with a line at its smallest margin.
   for (const s of g.spans) {
-    const fill = s.level === 'stop' ? 'url(#hr-hatch-stop)' : 'url(#hr-hatch-caution)';
-    const w = Math.max(2, s.x1 - s.x0);
+    const stop = s.level === 'stop';
+    const fill = stop ? 'url(#hr-hatch-stop)' : 'url(#hr-hatch-caution)';
+    const w = s.drawX1 - s.drawX0;
+    const edge = stop
+      ? ` stroke="${PROFILE_INK.stop.ink}" stroke-width="1.5"`
+      : ' fill-opacity="0.7"';
     out.push(
-      `<rect data-span="${s.kind}" x="${f(s.x0)}" y="${f(plot.top)}" width="${f(w)}" height="${f(plot.height)}" fill="${fill}" fill-opacity="0.7"/>`,
+      `<rect data-span="${s.kind}" x="${f(s.drawX0)}" y="${f(plot.top)}" width="${f(w)}" height="${f(plot.height)}" fill="${fill}"${edge}/>`,
     );
+    if (stop || w > s.x1 - s.x0) {
+      const ink = stop ? PROFILE_INK.stop.ink : PROFILE_INK.caution.ink;
+      out.push(
+        `<line data-span-mark="${s.kind}" x1="${f(s.markX)}" x2="${f(s.markX)}" y1="${f(plot.top)}" y2="${f(bottom)}" stroke="${ink}" stroke-width="1.5"${stop ? '' : ' stroke-dasharray="4 3"'}/>`,
+      );
+    }
   }
-  out.push(`<path data-line="vapour" d="${g.paths.vapour}" ${lineAttrs('vapour')}/>`);
   out.push(`<path data-line="pipe" d="${g.paths.pipe}" ${lineAttrs('pipe')}/>`);
+  // The vapour line over the pipe on a white casing: near boiling the two nearly coincide.
+  out.push(
+    `<path d="${g.paths.vapour}" fill="none" stroke="#ffffff" stroke-width="4" stroke-opacity="0.85" stroke-linejoin="round"/>`,
+  );
+  out.push(`<path data-line="vapour" d="${g.paths.vapour}" ${lineAttrs('vapour')}/>`);
   out.push(`<path data-line="egl" d="${g.paths.egl}" ${lineAttrs('egl')}/>`);
   out.push(`<path data-line="hgl" d="${g.paths.hgl}" ${lineAttrs('hgl')}/>`);
   for (const l of g.levels) {
@@ -160,8 +176,12 @@ function chart(g: ProfileGeometry): string {
   for (const s of g.spans) {
     const ink = s.level === 'stop' ? PROFILE_INK.stop.ink : PROFILE_INK.caution.ink;
     const dash = s.level === 'stop' ? '' : ' stroke-dasharray="5 3"';
-    const x0 = clamp(s.x0, plot.left, right);
-    const x1 = clamp(s.x1, plot.left, right);
+    const x0 = clamp(s.drawX0, plot.left, right);
+    const x1 = clamp(s.drawX1, plot.left, right);
+    if (s.level === 'stop' || s.drawX1 - s.drawX0 > s.x1 - s.x0)
+      out.push(
+        `<path data-span-marker="${s.kind}" d="M${f(s.markX - 5)} ${f(plot.top - 1)}h10l-5 7z" fill="${ink}"/>`,
+      );
     out.push(
       `<line x1="${f(x0)}" x2="${f(Math.max(x1, x0 + 1))}" y1="${f(bottom - 2)}" y2="${f(bottom - 2)}" stroke="${ink}" stroke-width="4"${dash}/>`,
       `<text data-span-label="${s.kind}" ${HALO} x="${f(s.labelX)}" y="${f(s.labelY)}" text-anchor="middle" fill="${ink}" font-weight="${s.level === 'stop' ? 600 : 500}">${escapeXml(s.text)}</text>`,

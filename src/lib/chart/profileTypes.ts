@@ -52,6 +52,14 @@ export interface Tick {
 export interface PlacedSpan extends MarkedSpan {
   x0: number;
   x1: number;
+  /**
+   * The span as drawn, px: at least MIN_SPAN_PX wide, centred on the span, so a 2 m span on a
+   * long route still shows.
+   */
+  drawX0: number;
+  drawX1: number;
+  /** Where the smallest margin is, px (the marker's position). */
+  markX: number;
   /** Label text: what is wrong, the smallest margin and its chainage. */
   text: string;
   labelX: number;
