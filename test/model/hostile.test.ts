@@ -115,12 +115,12 @@ const EXPECTED: Record<string, { message: string; path: string; element?: string
   'outflow-as-text': {
     message: '"outflow" should be a number, but is the text "5 m3/h"',
     path: 'nodes.B1.outflow',
-    element: 'Boundary "Draw-off to unit 2" (B1)',
+    element: 'Header or draw-off "Draw-off to unit 2" (B1)',
   },
   'boundary-holds-unknown': {
     message: '"holds" is the text "vacuum", which is not one of the allowed values',
     path: 'nodes.B1.holds',
-    element: 'Boundary "Draw-off to unit 2" (B1)',
+    element: 'Header or draw-off "Draw-off to unit 2" (B1)',
   },
   'nodes-as-list': {
     message: '"nodes" should be an object of records keyed by id, but is a list',

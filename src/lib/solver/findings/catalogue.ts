@@ -104,13 +104,13 @@ export function findingsIn(system: UnitSystem) {
     noFixedHead: (elements: Id[]) =>
       finding(
         'no-fixed-head',
-        'Nothing on the sheet fixes a head: add a vessel or a boundary so the flows and pressures can be found.',
+        'Nothing on the sheet fixes a head: add a vessel or a header (fixed pressure) so the flows and pressures can be found.',
         elements,
       ),
     cutOff: (names: string[], elements: Id[]) =>
       finding(
         'cut-off',
-        `${list(names)} ${names.length === 1 ? 'is' : 'are'} not connected to any vessel or boundary, so ${names.length === 1 ? 'its' : 'their'} pressures cannot be found; connect them or remove them.`,
+        `${list(names)} ${names.length === 1 ? 'is' : 'are'} not connected to any vessel or header, so ${names.length === 1 ? 'its' : 'their'} pressures cannot be found; connect them or remove them.`,
         elements,
       ),
     /**

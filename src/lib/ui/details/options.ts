@@ -1,30 +1,14 @@
 /** Option lists for the details pickers, in the words the user reads. */
+import { FITTING_TYPE_NAMES } from '../../model/labels';
 import type { FittingType, LossMethod, ValveCharacteristic } from '../../model/types';
 
-export const FITTING_TYPES: ReadonlyArray<readonly [FittingType, string]> = [
-  ['elbow-90-standard', '90° elbow, standard'],
-  ['elbow-90-long-radius', '90° elbow, long radius'],
-  ['elbow-45-standard', '45° elbow, standard'],
-  ['elbow-45-long-radius', '45° elbow, long radius'],
-  ['tee-run', 'Tee, flow through run'],
-  ['tee-branch', 'Tee, flow through branch'],
-  ['gate-valve', 'Gate valve'],
-  ['globe-valve', 'Globe valve'],
-  ['ball-valve', 'Ball valve'],
-  ['butterfly-valve', 'Butterfly valve'],
-  ['swing-check-valve', 'Swing check valve'],
-  ['lift-check-valve', 'Lift check valve'],
-  ['strainer', 'Strainer'],
-  ['flow-meter', 'Flow meter'],
-  ['reducer', 'Reducer'],
-  ['expander', 'Expander'],
-  ['restriction-orifice', 'Restriction orifice'],
-];
+/** Fitting types in words, in picker order (the one list is in model/labels.ts). */
+export const FITTING_TYPES = FITTING_TYPE_NAMES;
 
-/** What a boundary holds. */
+/** What a header / draw-off holds (the file's boundary kind). */
 export const BOUNDARY_HOLDS: ReadonlyArray<readonly ['pressure' | 'flow', string]> = [
-  ['pressure', 'Pressure (header)'],
-  ['flow', 'Flow (draw-off)'],
+  ['pressure', 'Fixed pressure (header)'],
+  ['flow', 'Fixed flow (draw-off / supply)'],
 ];
 
 export const LOSS_METHODS: ReadonlyArray<readonly [LossMethod, string]> = [

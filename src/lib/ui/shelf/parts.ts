@@ -88,8 +88,21 @@ export const SHELF: ShelfGroup[] = [
     parts: [
       { id: 'pipe', label: 'Pipe', symbol: 'pipe', kind: 'pipe' },
       { id: 'waypoint', label: 'Waypoint', symbol: 'waypoint', kind: 'waypoint' },
-      { id: 'junction', label: 'Junction', symbol: 'junction', kind: 'junction' },
-      { id: 'boundary', label: 'Boundary', symbol: 'boundary', kind: 'boundary' },
+      { id: 'junction', label: 'Branch point', symbol: 'junction', kind: 'junction' },
+      {
+        id: 'boundary',
+        label: 'Header (fixed pressure)',
+        symbol: 'boundary',
+        kind: 'boundary',
+        props: { holds: 'pressure' },
+      },
+      {
+        id: 'draw-off',
+        label: 'Draw-off / supply (fixed flow)',
+        symbol: 'boundary-flow',
+        kind: 'boundary',
+        props: { holds: 'flow', outflow: 0 },
+      },
     ],
   },
 ];
