@@ -53,7 +53,7 @@ function chooseRoute(
     const nodes = defaultRoute(doc, result);
     if (!nodes)
       throw new CliError(
-        `No route to show in ${file}: no two vessels or boundaries are joined by pipes.`,
+        `No route to show in ${file}: no two vessels, headers or draw-offs are joined by pipes.`,
         EXIT.noRoute,
       );
     return { nodes, name: undefined, note: null };

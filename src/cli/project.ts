@@ -45,6 +45,14 @@ function quoteList(names: string[]): string {
 }
 
 /** Finds a record by id, then by exact name, then by name ignoring case; throws when none or several. */
+/** The words of a name, lower case, split at spaces, brackets and commas: its tags among them. */
+function nameTags(name: string): string[] {
+  return name
+    .toLowerCase()
+    .split(/[\s(),;]+/)
+    .filter((w) => w !== '');
+}
+
 function findByIdOrName<T extends { id: Id; name: string }>(
   records: Record<Id, T>,
   text: string,
@@ -56,6 +64,12 @@ function findByIdOrName<T extends { id: Id; name: string }>(
   let matches = all.filter((r) => r.name === text);
   if (matches.length === 0)
     matches = all.filter((r) => r.name.toLowerCase() === text.toLowerCase());
+  // A tag within the name ("T-101" in "Storage tank T-101"), when only one name carries it.
+  if (matches.length === 0) {
+    const tag = text.toLowerCase();
+    const tagged = all.filter((r) => nameTags(r.name).includes(tag));
+    if (tagged.length === 1) return tagged[0];
+  }
   if (matches.length === 1) return matches[0];
   if (matches.length > 1) {
     throw new CliError(

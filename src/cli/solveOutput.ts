@@ -2,6 +2,7 @@
  * `headroute solve` output in its three formats. Every format carries the screening caution:
  * text as a footer, CSV as a comment line, JSON as a "caution" field.
  */
+import { fittingTypeName } from '../lib/model/labels';
 import type { Finding } from '../lib/solver/types';
 import { formatQuantity, type UnitSystem } from '../lib/units';
 import type { ControlValveRow, FittingRow, PipeRow, PumpRow, SolveReport } from './solveReport';
@@ -47,7 +48,11 @@ const CONTROL_VALVE_COLUMNS: Column<ControlValveRow>[] = [
 
 const FITTING_COLUMNS: Column<FittingRow>[] = [
   { title: 'fitting or valve', quantity: null, value: (r) => r.name },
-  { title: 'type', quantity: null, value: (r) => r.fittingType + (r.closed ? ' (shut)' : '') },
+  {
+    title: 'type',
+    quantity: null,
+    value: (r) => fittingTypeName(r.fittingType).toLowerCase() + (r.closed ? ' (shut)' : ''),
+  },
   { title: 'flow', quantity: 'volumeFlow', value: (r) => r.flow },
   { title: 'K', quantity: null, value: (r) => r.lossCoefficient, digits: 3 },
   { title: 'loss', quantity: 'head', value: (r) => r.headLoss },
@@ -84,7 +89,7 @@ function headerLines(r: SolveReport): string[] {
 
 function routeLine(r: SolveReport): string {
   const route = r.route;
-  if (!route) return 'Route: none (no two vessels or boundaries are joined by pipes).';
+  if (!route) return 'Route: none (no two vessels, headers or draw-offs are joined by pipes).';
   const s = r.unitSystem;
   const base = `Route ${route.name}: ${fq(route.length, 'length', s)} along ${route.nodes.length} nodes`;
   if (route.lowestVapourMargin === null) return `${base}; no solved stations.`;

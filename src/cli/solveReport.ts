@@ -92,10 +92,20 @@ function label(doc: HeadrouteDocument, id: Id): string {
   return Object.hasOwn(doc.nodes, id) ? nodeLabel(doc.nodes[id]) : id;
 }
 
-function byName<T extends { name: string; id: Id }>(rows: T[]): T[] {
+/**
+ * Rows in route (flow) order: elements on the default route by their place along it, then
+ * the others by name (numbers in names in numeric order).
+ */
+function inRouteOrder<T extends { name: string; id: Id }>(
+  rows: T[],
+  place: ReadonlyMap<Id, number>,
+): T[] {
+  const at = (r: T) => place.get(r.id) ?? Infinity;
   return rows.sort(
     (a, b) =>
-      a.name.localeCompare(b.name, undefined, { numeric: true }) || a.id.localeCompare(b.id),
+      at(a) - at(b) ||
+      a.name.localeCompare(b.name, undefined, { numeric: true }) ||
+      a.id.localeCompare(b.id),
   );
 }
 
@@ -103,7 +113,7 @@ function byName<T extends { name: string; id: Id }>(rows: T[]): T[] {
 function routeSummary(
   doc: HeadrouteDocument,
   result: SolveResult,
-): { summary: RouteSummary; findings: Finding[] } | null {
+): { summary: RouteSummary; findings: Finding[]; place: Map<Id, number> } | null {
   const nodes = defaultRoute(doc, result);
   if (!nodes) return null;
   let prof;
@@ -113,6 +123,10 @@ function routeSummary(
     if (error instanceof RouteError) return null;
     throw error;
   }
+  const place = new Map<Id, number>();
+  prof.stations.forEach((s, i) => {
+    if (!place.has(s.elementId)) place.set(s.elementId, i);
+  });
   const lowest = lowestVapourMargin(prof);
   const last = prof.stations[prof.stations.length - 1];
   return {
@@ -129,6 +143,7 @@ function routeSummary(
         : null,
     },
     findings: routeFindings(doc, result, prof),
+    place,
   };
 }
 
@@ -176,6 +191,7 @@ export function solveReport(
   }
   const route = routeSummary(doc, result);
   const findings = [...result.findings, ...(route?.findings ?? [])];
+  const place = route?.place ?? new Map<Id, number>();
   const counts = { stop: 0, caution: 0, note: 0 };
   for (const f of findings) counts[f.level]++;
   const caseId = result.caseId;
@@ -195,10 +211,10 @@ export function solveReport(
     iterations: result.iterations,
     residual: result.residual,
     massImbalance: result.massImbalance,
-    pipes: byName(pipes),
-    pumps: byName(pumps),
-    controlValves: byName(controlValves),
-    fittings: byName(fittings),
+    pipes: inRouteOrder(pipes, place),
+    pumps: inRouteOrder(pumps, place),
+    controlValves: inRouteOrder(controlValves, place),
+    fittings: inRouteOrder(fittings, place),
     route: route?.summary ?? null,
     findings,
     counts,

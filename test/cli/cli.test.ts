@@ -209,6 +209,15 @@ describe('headroute solve: --strict and errors', () => {
 describe('headroute profile', () => {
   const file = `${EXAMPLES}/pump-over-rack.headroute.json`;
 
+  it('--from and --to take a tag within a name when only one name carries it', async () => {
+    const run = await headroute('profile', file, '--from', 'T-101', '--to', 'v-201');
+    expect(run.stderr).toBe('');
+    expect(run.code).toBe(0);
+    const rows = run.stdout.split('\n').filter((l) => /^[\d.]+,/.test(l));
+    expect(rows[0]).toMatch(/^0,Storage tank T-101,level,/);
+    expect(rows[rows.length - 1]).toMatch(/^104\.5,Receiver V-201 \(vented\),level,/);
+  }, 30_000);
+
   it('prints the stations as CSV between nodes named by name or id', async () => {
     const run = await headroute('profile', file, '--from', 'Storage tank T-101', '--to', 'V2');
     expect(run.code).toBe(0);
@@ -275,4 +284,28 @@ describe('headroute profile', () => {
     expect(unknown.stderr).toMatch(/no node “Nowhere”/);
     expect(half.code).toBe(2);
   }, 60_000);
+});
+
+describe('solve text: tables in route order, fitting types in words', () => {
+  it('demo 1: pipes L1 … L12 in flow order, fittings as words', async () => {
+    const run = await headroute('solve', `${EXAMPLES}/pump-over-rack.headroute.json`);
+    expect(run.code).toBe(0);
+    const text = run.stdout;
+    // Along the route: suction pipes before the rack run, the rack run before the receiver.
+    const at = (name: string) => text.indexOf(name);
+    expect(at('HV-101')).toBeGreaterThan(-1);
+    expect(at('HV-101')).toBeLessThan(at('Strainer Y-101'));
+    expect(at('Strainer Y-101')).toBeLessThan(at('NRV-101'));
+    expect(at('Riser top elbow')).toBeLessThan(at('Rack drop elbow'));
+    expect(text).toContain('gate valve');
+    expect(text).not.toMatch(/\bgate-valve\b/);
+  }, 30_000);
+
+  it('JSON keeps the file kinds and ids (an interface), rows in route order', async () => {
+    const json = await solveJson('pump-over-rack.headroute.json');
+    const ids = json.pipes.map((p: { id: string }) => p.id);
+    expect(ids.slice(0, 3)).toEqual(['L1', 'L2', 'L3']);
+    expect(ids.indexOf('L10')).toBeLessThan(ids.indexOf('L7'));
+    expect(json.fittings.find((f: { id: string }) => f.id === 'F1').fittingType).toBe('gate-valve');
+  }, 30_000);
 });
