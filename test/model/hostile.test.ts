@@ -3,7 +3,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { parseProjectFile, serializeProject } from '../../src/lib/model/file';
 import { MAX_ELEMENTS, MAX_FILE_CHARS } from '../../src/lib/model/file/limits';
-import { createDocument, createNode } from '../../src/lib/model/defaults';
+import { createDocument, createNode, createPipe } from '../../src/lib/model/defaults';
 
 const dir = fileURLToPath(new URL('../fixtures/hostile/', import.meta.url));
 
@@ -174,8 +174,32 @@ describe('hostile files', () => {
     expect(result.ok).toBe(false);
     if (!result.ok) {
       expect(result.errors[0].path).toBe('nodes');
-      expect(result.errors[0].message).toContain(`too many records, at most ${MAX_ELEMENTS}`);
+      expect(result.errors[0].message).toBe(
+        '"nodes" has more than 20,000 entries; no part of a project file holds that many.',
+      );
     }
+  }, 60_000);
+
+  it(`refuses more than ${MAX_ELEMENTS} nodes and pipes together on load`, () => {
+    const doc = createDocument('Over the limit');
+    for (let i = 1; i <= 10_001; i++) {
+      doc.nodes[`J${i}`] = createNode('junction', { x: i, y: 0 }, `J${i}`);
+    }
+    for (let i = 1; i <= 10_000; i++) {
+      doc.pipes[`L${i}`] = createPipe(
+        { node: `J${i}`, port: 'hub' },
+        { node: `J${i + 1}`, port: 'hub' },
+        `L${i}`,
+      );
+    }
+    const result = parseProjectFile(serializeProject(doc));
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expect(result.errors[0]).toEqual({
+      path: 'pipes',
+      message:
+        'The project has 20,001 elements (nodes and pipes together); Headroute works with at most 20,000, as when adding parts.',
+    });
   }, 60_000);
 
   it('reports at most 50 problems plus a summary line', () => {

@@ -1,5 +1,6 @@
 /** The project file: read (with migrations and validation) and write. */
-export { parseProjectFile, FORBIDDEN_KEYS, type ParseResult } from './parse';
+export { parseProjectFile, type ParseResult } from './parse';
+export { FORBIDDEN_KEYS, scanJsonText } from './textScan';
 export { serializeProject, projectFileName } from './serialize';
 export { MIGRATIONS, migrate, type Migration, type MigrationResult } from './migrations';
 export { validateDocument, MAX_REPORTED_PROBLEMS, type ValidationResult } from './validate';

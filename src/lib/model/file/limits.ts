@@ -23,3 +23,11 @@ export const MAX_ELEVATION = 1e4;
 /** Most lines in one pipe's fittings list, and most fittings on one line. */
 export const MAX_PIPE_FITTING_LINES = 50;
 export const MAX_FITTING_COUNT = 1000;
+/** Most entries in one object or list of the file (the largest is a record collection). */
+export const MAX_ENTRIES = MAX_ELEMENTS;
+/**
+ * Most objects and lists in the whole file. A file at the size limit written by Headroute holds
+ * far fewer (each object takes tens of characters); a file of millions of tiny lists is refused
+ * before `JSON.parse` builds them.
+ */
+export const MAX_CONTAINERS = 1_000_000;

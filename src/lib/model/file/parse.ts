@@ -1,17 +1,18 @@
 /**
  * Reading a project file. Nothing from the file is trusted until it has passed every check:
- * size, JSON syntax, forbidden keys and nesting depth, format tag and version, migrations,
+ * size; then depth, forbidden and duplicate keys and entry counts in one pass over the text
+ * (./textScan.ts); JSON syntax, format tag and version, migrations,
  * the schema, and the links between records. A file that fails returns messages; it never throws
  * and never yields a partial document:
  * either the whole project or nothing.
  */
 import type { DocumentProblem } from '../integrity';
-import { joinPath } from '../integrity';
 import type { HeadrouteDocument } from '../types';
-import { findDuplicateKey } from './duplicateKeys';
-import { MAX_DEPTH, MAX_FILE_CHARS } from './limits';
+import { MAX_FILE_CHARS } from './limits';
+import { quoteKey } from './messages';
 import { migrate } from './migrations';
 import { validateDocument } from './validate';
+import { scanJsonText } from './textScan';
 import { CURRENT_VERSION, FORMAT_TAG } from './version';
 
 /** Outcome of reading a project file. */
@@ -19,49 +20,33 @@ export type ParseResult =
   | { ok: true; document: HeadrouteDocument; migratedFrom?: number }
   | { ok: false; errors: DocumentProblem[] };
 
-/** Keys that could reach an object's prototype if copied carelessly; refused anywhere. */
-export const FORBIDDEN_KEYS: readonly string[] = ['__proto__', 'constructor', 'prototype'];
-
 function fail(message: string, path = '$'): ParseResult {
   return { ok: false, errors: [{ path, message }] };
 }
 
-/** Walk the parsed JSON without recursion: refuse forbidden keys and deep nesting. */
-function scanTree(root: unknown): DocumentProblem | undefined {
-  const stack: Array<{ value: unknown; path: string; depth: number }> = [
-    { value: root, path: '', depth: 0 },
-  ];
-  while (stack.length > 0) {
-    const { value, path, depth } = stack.pop()!;
-    if (typeof value !== 'object' || value === null) continue;
-    if (depth >= MAX_DEPTH) {
-      return {
-        path: path || '$',
-        message: `The file is nested more than ${MAX_DEPTH} levels deep; a project file is never that deep.`,
-      };
-    }
-    if (Array.isArray(value)) {
-      value.forEach((item, i) =>
-        stack.push({ value: item, path: joinPath(path, i), depth: depth + 1 }),
-      );
-      continue;
-    }
-    for (const key of Object.keys(value)) {
-      const childPath = joinPath(path, key);
-      if (FORBIDDEN_KEYS.includes(key)) {
-        return {
-          path: childPath,
-          message: `The file contains a key named "${key}", which is not allowed in a project file.`,
-        };
-      }
-      stack.push({
-        value: (value as Record<string, unknown>)[key],
-        path: childPath,
-        depth: depth + 1,
-      });
-    }
+/** Line and column (from 1) of a character offset in `text`. */
+function lineAndColumn(text: string, offset: number): { line: number; column: number } {
+  let line = 1;
+  let lineStart = 0;
+  for (let i = text.indexOf('\n'); i >= 0 && i < offset; i = text.indexOf('\n', i + 1)) {
+    line++;
+    lineStart = i + 1;
   }
-  return undefined;
+  return { line, column: offset - lineStart + 1 };
+}
+
+/**
+ * Where JSON.parse stopped, in words of our own: the engine's message quotes the text around
+ * the fault, which may be raw binary or a huge key, so it is never shown.
+ */
+function syntaxWhere(text: string, error: unknown): string {
+  const detail = error instanceof Error ? error.message : '';
+  const at = /position (\d+)/.exec(detail);
+  if (!at) return 'it ends too soon or holds something JSON does not allow';
+  const offset = Number(at[1]);
+  const { line, column } = lineAndColumn(text, offset);
+  const found = offset < text.length ? `"${quoteKey(text.slice(offset, offset + 1))}"` : 'the end';
+  return `line ${line}, column ${column}: unexpected ${found}`;
 }
 
 /** Read a `*.headroute.json` text into a validated document, or say what is wrong and where. */
@@ -73,22 +58,18 @@ export function parseProjectFile(text: string): ParseResult {
       `The file is too large (${mb} MB); Headroute opens project files up to ${MAX_FILE_CHARS / (1024 * 1024)} MB.`,
     );
   }
+  const body = text.startsWith('\uFEFF') ? text.slice(1) : text;
+  // Cheap checks first, in one pass over the text, before JSON.parse builds anything.
+  const scanned = scanJsonText(body);
+  if (scanned) return { ok: false, errors: [{ path: scanned.path, message: scanned.message }] };
   let raw: unknown;
   try {
-    raw = JSON.parse(text.replace(/^\uFEFF/, ''));
+    raw = JSON.parse(body);
   } catch (error) {
-    const detail = error instanceof Error ? error.message : String(error);
-    return fail(`The file is not valid JSON; it may be cut short or damaged (${detail}).`);
-  }
-  const duplicate = findDuplicateKey(text);
-  if (duplicate) {
     return fail(
-      `The key "${duplicate.key.slice(0, 40)}" is written twice in the same object; each id and field may appear only once.`,
-      duplicate.path,
+      `The file is not valid JSON; it may be cut short or damaged (${syntaxWhere(body, error)}).`,
     );
   }
-  const hostile = scanTree(raw);
-  if (hostile) return { ok: false, errors: [hostile] };
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
     return fail('The file does not hold a Headroute project (expected a JSON object).');
   }

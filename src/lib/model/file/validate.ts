@@ -2,6 +2,7 @@
 import * as v from 'valibot';
 import { checkIntegrity, type DocumentProblem } from '../integrity';
 import type { HeadrouteDocument } from '../types';
+import { MAX_ELEMENTS } from './limits';
 import { issueToProblem } from './messages';
 import { DocumentSchema } from './schema';
 
@@ -33,6 +34,18 @@ export function validateDocument(value: unknown): ValidationResult {
     return { ok: false, errors: capped(parsed.issues.map((i) => issueToProblem(i, value))) };
   }
   const document = parsed.output as HeadrouteDocument;
+  const elements = Object.keys(document.nodes).length + Object.keys(document.pipes).length;
+  if (elements > MAX_ELEMENTS) {
+    return {
+      ok: false,
+      errors: [
+        {
+          path: 'pipes',
+          message: `The project has ${elements.toLocaleString('en')} elements (nodes and pipes together); Headroute works with at most ${MAX_ELEMENTS.toLocaleString('en')}, as when adding parts.`,
+        },
+      ],
+    };
+  }
   const problems = checkIntegrity(document);
   if (problems.length > 0) return { ok: false, errors: capped(problems) };
   return { ok: true, document };
