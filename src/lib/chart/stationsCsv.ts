@@ -37,7 +37,9 @@ export function stationsCsv(
   meta: ExportMeta,
   names: Record<Id, string> = {},
 ): string {
-  const comments = [...metaLines(meta), `Units: ${system}`, SCREENING_CAUTION].map((l) => `# ${l}`);
+  const comments = [...metaLines(meta), `Units: ${system}`, SCREENING_CAUTION].map(
+    (l) => `# ${oneLine(l)}`,
+  );
   const header = COLUMNS.map((c) =>
     csvField(c.quantity ? `${c.title} (${displayUnit(c.quantity, system)})` : c.title),
   ).join(',');
@@ -56,7 +58,25 @@ function numberField(v: number): string {
   return Number.isFinite(v) ? String(Number(v.toPrecision(6))) : '';
 }
 
-/** Quotes a field when it holds a comma, quote or line break (RFC 4180). */
-function csvField(text: string): string {
-  return /[",\n\r]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+/** A comment line's text on one line: a line break in a name cannot end the `#` line. */
+function oneLine(text: string): string {
+  return text.replace(/[\r\n\u2028\u2029]+/g, ' ');
+}
+
+/**
+ * A text cell a spreadsheet will not run as a formula: one beginning with '=', '+', '@', a tab,
+ * a carriage return, or '-' not starting a number gets a leading apostrophe (the usual guidance
+ * on CSV formula injection, common practice).
+ */
+export function neutralise(text: string): string {
+  return /^[=+@\t\r]/.test(text) ||
+    (text.startsWith('-') && !/^-\d+(\.\d+)?([eE][+-]?\d+)?$/.test(text))
+    ? `'${text}`
+    : text;
+}
+
+/** A text cell: neutralised, then quoted when it holds a comma, quote or line break (RFC 4180). */
+export function csvField(text: string): string {
+  const safe = neutralise(text);
+  return /[",\n\r]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
