@@ -47,6 +47,8 @@ class Editor {
   revision = $state(this.#history.revision);
   canUndo = $state(false);
   canRedo = $state(false);
+  /** The latest document outside a gesture: a committed edit (changes at a drag's end). */
+  committedDoc = $state.raw<HeadrouteDocument>(this.#history.doc);
   /** Revision last saved or loaded; the project is unsaved when it differs. */
   savedRevision = $state(this.#history.revision);
   fileName = $state<string | null>(null);
@@ -185,7 +187,10 @@ class Editor {
     this.revision = h.revision;
     this.canUndo = h.canUndo;
     this.canRedo = h.canRedo;
-    if (!h.inGesture) this.#lagInGesture = false;
+    if (!h.inGesture) {
+      this.#lagInGesture = false;
+      this.committedDoc = h.doc;
+    }
     if (!this.#carryResult(before, beforeRevision)) this.#requestSolve();
   }
 

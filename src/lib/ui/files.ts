@@ -1,15 +1,18 @@
 /**
  * Project files in the browser: new, open (picker or drop), save (download), the demo
- * projects, autosave and its restore. Loading is never undoable; a refused file leaves the
- * open project untouched.
+ * projects, and the restore of autosaved work at start-up (storage/autosaveSession.svelte.ts).
+ * Loading is never undoable; a refused file leaves the open project untouched, and the
+ * question about unsaved changes comes only once a file has been read and accepted.
  */
 import { base } from '$app/paths';
 import { createDocument } from '../model/defaults';
 import { parseProjectFile, projectFileName, serializeProject } from '../model/file';
 import { loadExample, type ExampleProject } from '../model/examples';
-import { clearAutosave, createAutosaver, loadAutosave } from '../model/storage/autosave';
 import type { HeadrouteDocument } from '../model/types';
+import { downloadText } from './downloadText';
 import { editor } from './editor.svelte';
+import { autosaveSession, AutosaveSession } from './storage/autosaveSession.svelte';
+import type { OfferedCopy } from './storage/restore';
 
 /** Largest project file the app will read, bytes. */
 export const MAX_FILE_BYTES = 20 * 1024 * 1024;
@@ -19,21 +22,28 @@ function mayDiscard(): boolean {
   return !editor.dirty || confirm('The project has unsaved changes. Discard them?');
 }
 
-/** Load project text; on refusal say why (first few problems) and keep the open project. */
-export function loadProjectText(text: string, fileName: string | null): boolean {
+/** Read project text; on refusal say why (first few problems) and return null. */
+function readProjectText(text: string, fileName: string | null) {
   const parsed = parseProjectFile(text);
-  if (!parsed.ok) {
-    const first = parsed.errors
-      .slice(0, 3)
-      .map((e: { path: string; message: string }) =>
-        e.path ? `${e.path}: ${e.message}` : e.message,
-      )
-      .join('; ');
-    const more = parsed.errors.length > 3 ? ` (and ${parsed.errors.length - 3} more)` : '';
-    editor.say(`${fileName ?? 'The file'} was not opened: ${first}${more}`, 'error');
-    return false;
-  }
+  if (parsed.ok) return parsed;
+  const first = parsed.errors
+    .slice(0, 3)
+    .map((e: { path: string; message: string }) => (e.path ? `${e.path}: ${e.message}` : e.message))
+    .join('; ');
+  const more = parsed.errors.length > 3 ? ` (and ${parsed.errors.length - 3} more)` : '';
+  editor.say(`${fileName ?? 'The file'} was not opened: ${first}${more}`, 'error');
+  return null;
+}
+
+/**
+ * Load project text; on refusal say why and keep the open project. Unsaved changes are asked
+ * about only once the text has been read and accepted.
+ */
+export function loadProjectText(text: string, fileName: string | null): boolean {
+  const parsed = readProjectText(text, fileName);
+  if (!parsed || !mayDiscard()) return false;
   editor.load(parsed.document as HeadrouteDocument, fileName);
+  autosaveSession.setBaseline(editor.doc);
   editor.say(
     parsed.migratedFrom !== undefined
       ? `Opened ${fileName ?? parsed.document.name} (updated from file version ${parsed.migratedFrom}).`
@@ -46,6 +56,7 @@ export function loadProjectText(text: string, fileName: string | null): boolean 
 export function newProject(): void {
   if (!mayDiscard()) return;
   editor.load(createDocument('Untitled project'));
+  autosaveSession.setBaseline(editor.doc);
   editor.say('New project.');
 }
 
@@ -55,7 +66,6 @@ export async function openFile(file: File): Promise<boolean> {
     editor.say(`${file.name} was not opened: it is larger than 20 MB.`, 'error');
     return false;
   }
-  if (!mayDiscard()) return false;
   return loadProjectText(await file.text(), file.name);
 }
 
@@ -69,14 +79,15 @@ export async function openDemo(
   ask = true,
   unlessChangedSince?: number,
 ): Promise<boolean> {
-  if (ask && !mayDiscard()) return false;
   const parsed = await loadExample(example, undefined, base);
   if (unlessChangedSince !== undefined && editor.revision !== unlessChangedSince) return false;
   if (!parsed.ok) {
     editor.say(parsed.errors.map((e) => e.message).join('; '), 'error');
     return false;
   }
+  if (ask && !mayDiscard()) return false;
   editor.load(parsed.document);
+  autosaveSession.setBaseline(editor.doc);
   editor.say(`Opened the demo project “${example.title}”.`);
   return true;
 }
@@ -84,14 +95,10 @@ export async function openDemo(
 /** Save the project as a download. */
 export function saveProject(): void {
   const name = editor.fileName ?? projectFileName(editor.doc);
-  const blob = new Blob([serializeProject(editor.doc)], { type: 'application/json' });
-  const url = URL.createObjectURL(blob);
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = name;
-  a.click();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
+  const text = serializeProject(editor.doc);
+  downloadText(text, name);
   editor.markSaved(name);
+  autosaveSession.setBaseline(editor.doc, text);
   editor.say(`Saved ${name}.`);
 }
 
@@ -102,43 +109,40 @@ export interface RestoreNotice {
 }
 
 /**
- * At start-up: bring back the autosaved project if there is one (unsaved, so the guard still
- * asks), otherwise open the first demo. Returns a notice for the user, or null.
+ * At start-up: bring back this tab's autosaved project, or the newest one of a closed tab
+ * (unsaved only if it differs from the file it was last saved to or opened from), otherwise
+ * open the first demo. Returns a notice for the user, or null.
  */
 export async function startUp(firstDemo: ExampleProject): Promise<RestoreNotice | null> {
   const startRevision = editor.revision;
-  // An unreadable IndexedDB (private mode, blocked storage) simply means nothing to restore.
-  const restored = await loadAutosave().catch(() => null);
+  const plan = await autosaveSession.start(() => editor.fileName);
   // The user may already have pressed New or opened a file: never replace what they started.
-  if (editor.revision !== startRevision) return null;
-  if (restored?.ok) {
-    editor.load(restored.document, null, true);
-    const when = restored.savedAt ? new Date(restored.savedAt).toLocaleString() : 'earlier';
+  if (editor.revision !== startRevision) {
+    if (plan) await autosaveSession.keepApart(plan);
+    return null;
+  }
+  if (plan?.open) {
+    const { record, document, migratedFrom } = plan.open;
+    editor.load(document, record.fileName ?? null, AutosaveSession.unsavedIn(record));
+    await autosaveSession.opened(plan);
+    const when = record.savedAt ? new Date(record.savedAt).toLocaleString() : 'earlier';
+    const updated =
+      migratedFrom !== undefined ? ` (updated from file version ${migratedFrom})` : '';
     return {
-      text: `Restored “${restored.document.name}” from the autosave of ${when}.`,
+      text: `Restored “${document.name}” from the autosave of ${when}${updated}.`,
       level: 'info',
     };
   }
   await openDemo(firstDemo, false, startRevision);
-  if (restored && !restored.ok) {
-    return {
-      text: `The autosaved copy could not be read (${restored.errors[0]?.message ?? 'unknown problem'}); it is kept until you clear it.`,
-      level: 'error',
-    };
-  }
   return null;
 }
 
-/** Keep an autosave of the document, at most once a second, and on page hide. */
-export function startAutosave(): { schedule(doc: HeadrouteDocument): void; flush(): void } {
-  const saver = createAutosaver({
-    delayMs: 1000,
-    onError: (error) => editor.say(`Autosave failed: ${String(error)}`, 'error'),
-  });
-  return { schedule: (doc) => saver.schedule(doc), flush: () => void saver.flush() };
-}
-
-/** Forget the autosaved copy. */
-export async function discardAutosave(): Promise<void> {
-  await clearAutosave();
+/** Open a closed tab's autosaved copy in this tab (asking first about unsaved changes). */
+export async function openOffered(copy: OfferedCopy): Promise<boolean> {
+  if (!mayDiscard()) return false;
+  const { record, document } = copy.copy;
+  editor.load(document, record.fileName ?? null, AutosaveSession.unsavedIn(record));
+  await autosaveSession.adoptOffered(copy);
+  editor.say(`Opened the autosaved “${document.name}”.`);
+  return true;
 }

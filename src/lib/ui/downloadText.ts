@@ -1,0 +1,9 @@
+/** Offer `text` as a download named `name`. */
+export function downloadText(text: string, name: string, type = 'application/json'): void {
+  const url = URL.createObjectURL(new Blob([text], { type }));
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = name;
+  a.click();
+  setTimeout(() => URL.revokeObjectURL(url), 1000);
+}
