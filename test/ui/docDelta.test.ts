@@ -16,7 +16,7 @@ import type { HeadrouteDocument } from '../../src/lib/model/types';
 import { solve } from '../../src/lib/solver/solve';
 import type { SolveRequest, SolveResponse } from '../../src/lib/solver/worker';
 import { applyDocDelta, docDelta } from '../../src/lib/model/docDelta';
-import { createWorkerRunner } from '../../src/lib/ui/solveRunner';
+import { createWorkerRunner, type SolvePort } from '../../src/lib/ui/solveRunner';
 
 const waypointOf = (doc: HeadrouteDocument) =>
   Object.values(doc.nodes).find((n) => n.kind === 'waypoint')!;
@@ -63,7 +63,12 @@ describe('worker runner', () => {
   it('sends the whole document first, then only what changed, and delivers each result', async () => {
     const posted: SolveRequest[] = [];
     const delivered: SolveResponse[] = [];
-    const worker = { postMessage: (m: SolveRequest) => posted.push(m) } as unknown as Worker;
+    const worker: SolvePort = {
+      postMessage: (m: SolveRequest) => void posted.push(m),
+      onmessage: null,
+      onerror: null,
+      terminate: () => undefined,
+    };
     const runner = createWorkerRunner(
       worker,
       (r) => delivered.push(r),
@@ -75,8 +80,8 @@ describe('worker runner', () => {
       const request = posted[posted.length - 1];
       held = 'doc' in request ? request.doc : applyDocDelta(held!, request.delta);
       worker.onmessage!({
-        data: { revision: request.revision, result: solve(held, request.caseId) },
-      } as MessageEvent<SolveResponse>);
+        data: { id: request.id, revision: request.revision, result: solve(held, request.caseId) },
+      });
     };
     const history = new History(network('series', 8));
     runner.request(history.doc, 1, null);
@@ -90,5 +95,59 @@ describe('worker runner', () => {
     expect(held).toEqual(history.doc);
     expect(delivered.map((d) => d.revision)).toEqual([1, 2]);
     expect(delivered[1].result.nodes[w.id]).toEqual(solve(history.doc, null).nodes[w.id]);
+  });
+
+  it('an error reply ends that solve with a failure, and the next request sends the whole document', () => {
+    const posted: SolveRequest[] = [];
+    const delivered: SolveResponse[] = [];
+    const failures: Array<[string, number]> = [];
+    const worker: SolvePort = {
+      postMessage: (m: SolveRequest) => void posted.push(m),
+      onmessage: null,
+      onerror: null,
+      terminate: () => undefined,
+    };
+    const runner = createWorkerRunner(
+      worker,
+      (r) => delivered.push(r),
+      (message, revision) => void failures.push([message, revision]),
+    );
+    const history = new History(network('series', 8));
+    runner.request(history.doc, 1, null);
+    // A reply naming another request is not this one's answer.
+    worker.onmessage!({ data: { id: posted[0].id + 99, revision: 1, error: 'stray' } });
+    expect(failures).toEqual([]);
+    worker.onmessage!({ data: { id: posted[0].id, revision: 1, error: 'boom' } });
+    expect(failures).toEqual([['boom', 1]]);
+    const w = waypointOf(history.doc);
+    history.apply(updateNode(w.id, { z: w.z + 1 }));
+    runner.request(history.doc, 2, null);
+    expect(posted).toHaveLength(2);
+    expect(posted[1].id).not.toBe(posted[0].id);
+    expect('doc' in posted[1]).toBe(true);
+    worker.onmessage!({
+      data: { id: posted[1].id, revision: 2, result: solve(history.doc, null) },
+    });
+    expect(delivered.map((d) => d.revision)).toEqual([2]);
+  });
+
+  it('a worker that dies solves the request in flight in the page', async () => {
+    const delivered: SolveResponse[] = [];
+    const worker: SolvePort = {
+      postMessage: () => undefined,
+      onmessage: null,
+      onerror: null,
+      terminate: () => undefined,
+    };
+    const runner = createWorkerRunner(
+      worker,
+      (r) => delivered.push(r),
+      () => undefined,
+    );
+    runner.request(network('series', 5), 1, null);
+    worker.onerror!({ preventDefault: () => undefined });
+    await new Promise((resolve) => setTimeout(resolve, 0));
+    expect(delivered.map((d) => d.revision)).toEqual([1]);
+    expect(delivered[0].result.converged).toBe(true);
   });
 });

@@ -10,6 +10,7 @@ import type { Command, CommandError } from '../model/commands';
 import { createDocument } from '../model/defaults';
 import { onlySheetPositionsChanged } from '../model/sheetPositions';
 import type { HeadrouteDocument, Id } from '../model/types';
+import { failedSolve } from '../solver/failedSolve';
 import type { SolveResult } from '../solver/types';
 import { IDENTITY, type Viewport } from './sheet/viewport';
 import { createSolveRunner, type SolveRunner } from './solveRunner';
@@ -39,7 +40,7 @@ class Editor {
   #runner: SolveRunner | null = null;
   /** Documents sent to the solver and not yet answered, by revision (bookkeeping, not state). */
   // eslint-disable-next-line svelte/prefer-svelte-reactivity
-  #requested = new Map<number, HeadrouteDocument>();
+  #requested = new Map<number, { doc: HeadrouteDocument; caseId: Id | null }>();
 
   /** The document; replaced on every change. */
   doc = $state.raw<HeadrouteDocument>(this.#history.doc);
@@ -209,21 +210,29 @@ class Editor {
 
   #requestSolve(): void {
     this.#runner ??= createSolveRunner(
-      ({ revision, result }) => {
-        const doc = this.#requested.get(revision);
-        for (const r of this.#requested.keys()) if (r < revision) this.#requested.delete(r);
-        // Keep only the newest revision's result; a late reply for an older one is dropped.
-        if (doc && (!this.tagged || revision >= this.tagged.revision))
-          this.tagged = { revision, result, doc };
-      },
+      ({ revision, result }) => this.#solved(revision, () => result),
       (message, revision) => {
-        this.#requested.delete(revision);
+        // The solve ended in an error: show it as a finding on that revision (the status
+        // line stops saying "solving…"), never wait for ever.
+        this.#solved(revision, (doc, caseId) => failedSolve(doc, caseId, message));
         this.say(`The solver stopped: ${message}. The sheet stays editable.`, 'error');
       },
     );
-    this.#requested.set(this.revision, this.doc);
+    this.#requested.set(this.revision, { doc: this.doc, caseId: this.caseId });
     this.#runner.request(this.doc, this.revision, this.caseId);
     if (this.#history.inGesture && this.solving) this.#lagInGesture = true;
+  }
+
+  /** A solve for `revision` ended: keep its result if it is the newest one. */
+  #solved(
+    revision: number,
+    result: (doc: HeadrouteDocument, caseId: Id | null) => SolveResult,
+  ): void {
+    const asked = this.#requested.get(revision);
+    for (const r of this.#requested.keys()) if (r < revision) this.#requested.delete(r);
+    // Keep only the newest revision's result; a late reply for an older one is dropped.
+    if (asked && (!this.tagged || revision >= this.tagged.revision))
+      this.tagged = { revision, result: result(asked.doc, asked.caseId), doc: asked.doc };
   }
 
   /** Solve again (e.g. after the case changes). */

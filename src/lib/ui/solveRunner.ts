@@ -10,7 +10,7 @@
  */
 import type { HeadrouteDocument, Id } from '../model/types';
 import { solve } from '../solver/solve';
-import type { SolveRequest, SolveResponse } from '../solver/worker';
+import type { SolveReply, SolveRequest, SolveResponse } from '../solver/worker';
 
 /** A document waiting to be solved. */
 interface Job {
@@ -67,12 +67,25 @@ export function createInlineRunner(
   };
 }
 
+/** What the worker runner needs of a Worker (a stand-in in tests). */
+export interface SolvePort {
+  postMessage(request: SolveRequest): void;
+  onmessage: ((event: { data: SolveReply }) => void) | null;
+  onerror: ((event: { preventDefault(): void }) => void) | null;
+  terminate(): void;
+}
+
 /**
- * Solve in a Web Worker running solver/worker.ts; falls back to the page if the worker fails.
- * After the first document, each request sends only the records that changed (docDelta.ts).
+ * Solve in a Web Worker running solver/worker.ts; falls back to the page if the worker itself
+ * fails. Each request carries an id and the reply names it; an error comes back as a reply
+ * and ends that solve with `fail` (then the whole document is sent again). After the first
+ * document, each request sends only the records that changed (docDelta.ts).
  */
-export function createWorkerRunner(worker: Worker, deliver: Deliver, fail: Fail): SolveRunner {
+export function createWorkerRunner(worker: SolvePort, deliver: Deliver, fail: Fail): SolveRunner {
   let busy = false;
+  let nextId = 1;
+  /** Id of the request in flight. */
+  let inFlight = 0;
   let pending: Job | null = null;
   let fallback: SolveRunner | null = null;
   /** The document the worker holds (the last one sent). */
@@ -82,28 +95,46 @@ export function createWorkerRunner(worker: Worker, deliver: Deliver, fail: Fail)
     busy = true;
     const { doc, revision, caseId } = pending;
     const delta = sent && docDelta(sent, doc);
-    const request: SolveRequest = delta ? { revision, caseId, delta } : { revision, caseId, doc };
-    worker.postMessage(request);
-    sent = doc;
+    const id = (inFlight = nextId++);
+    const request: SolveRequest = delta
+      ? { id, revision, caseId, delta }
+      : { id, revision, caseId, doc };
     pending = null;
+    try {
+      worker.postMessage(request);
+    } catch (error) {
+      busy = false;
+      sent = null;
+      fail(String(error), revision);
+      return send();
+    }
+    sent = doc;
   };
-  worker.onmessage = (event: MessageEvent<SolveResponse>) => {
+  worker.onmessage = (event) => {
+    const reply = event.data;
+    if (reply.id !== inFlight) return; // not the request in flight
     busy = false;
-    deliver(event.data);
+    if ('error' in reply) {
+      sent = null; // the worker dropped its document
+      fail(reply.error, reply.revision);
+    } else deliver({ revision: reply.revision, result: reply.result });
     send();
   };
+  let lastJob: Job | null = null;
   worker.onerror = (event) => {
     event.preventDefault();
     busy = false;
     worker.terminate();
     fallback = createInlineRunner(deliver, fail);
-    if (pending) fallback.request(pending.doc, pending.revision, pending.caseId);
+    // The request in flight died with the worker: solve the newest document in the page.
+    const job = pending ?? lastJob;
+    if (job) fallback.request(job.doc, job.revision, job.caseId);
   };
   return {
     request(doc, revision, caseId) {
       if (fallback) return fallback.request(doc, revision, caseId);
       // $state.raw documents are plain frozen objects: structured clone copies them as they are.
-      pending = { doc, revision, caseId };
+      pending = lastJob = { doc, revision, caseId };
       send();
     },
     dispose() {
@@ -172,7 +203,7 @@ export function createSolveRunner(deliver: Deliver, fail: Fail): SolveRunner {
     try {
       const worker = new Worker(new URL('../solver/worker.ts', import.meta.url), {
         type: 'module',
-      });
+      }) as unknown as SolvePort;
       return createAdaptiveRunner(createWorkerRunner(worker, deliver, fail), deliver, fail);
     } catch {
       // fall through to solving in the page
