@@ -5,7 +5,14 @@
 import { fittingTypeName } from '../lib/model/labels';
 import type { Finding } from '../lib/solver/types';
 import { formatQuantity, type UnitSystem } from '../lib/units';
-import type { ControlValveRow, FittingRow, PipeRow, PumpRow, SolveReport } from './solveReport';
+import type {
+  ControlValveRow,
+  FittingRow,
+  PipeFittingsRow,
+  PipeRow,
+  PumpRow,
+  SolveReport,
+} from './solveReport';
 import { csvTable, textTable, type Column } from './table';
 
 const PIPE_COLUMNS: Column<PipeRow>[] = [
@@ -58,6 +65,13 @@ const FITTING_COLUMNS: Column<FittingRow>[] = [
   { title: 'loss', quantity: 'head', value: (r) => r.headLoss },
 ];
 
+const PIPE_FITTINGS_COLUMNS: Column<PipeFittingsRow>[] = [
+  { title: 'pipe', quantity: null, value: (r) => r.name },
+  { title: 'fittings', quantity: null, value: (r) => r.text },
+  { title: 'K', quantity: null, value: (r) => r.fittingK, digits: 3 },
+  { title: 'loss', quantity: 'head', value: (r) => r.fittingLoss },
+];
+
 const FINDING_COLUMNS: Column<Finding>[] = [
   { title: 'level', quantity: null, value: (f) => f.level },
   { title: 'code', quantity: null, value: (f) => f.code },
@@ -104,6 +118,9 @@ export function solveText(r: SolveReport): string {
   out.push('Pumps', textTable(r.pumps, PUMP_COLUMNS, s), '');
   out.push('Control valves', textTable(r.controlValves, CONTROL_VALVE_COLUMNS, s), '');
   out.push('Fittings and valves', textTable(r.fittings, FITTING_COLUMNS, s), '');
+  if (r.pipeFittings.length) {
+    out.push('Fittings on pipes', textTable(r.pipeFittings, PIPE_FITTINGS_COLUMNS, s), '');
+  }
   out.push(routeLine(r), '');
   const { stop, caution, note } = r.counts;
   out.push(`Findings (${stop} stop, ${caution} caution, ${note} note)`);
@@ -130,6 +147,10 @@ export function solveCsv(r: SolveReport): string {
   section('Fittings and valves', r.fittings, [
     { title: 'id', quantity: null, value: (p) => p.id },
     ...FITTING_COLUMNS,
+  ]);
+  section('Fittings on pipes', r.pipeFittings, [
+    { title: 'id', quantity: null, value: (p) => p.id },
+    ...PIPE_FITTINGS_COLUMNS,
   ]);
   section('Findings', sortedFindings(r.findings), FINDING_COLUMNS);
   out.push('');

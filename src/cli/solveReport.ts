@@ -4,7 +4,8 @@
  */
 import { SCREENING_CAUTION } from '../lib/chart/exportMeta';
 import { nodeLabel } from '../lib/model/labels';
-import type { FittingType, HeadrouteDocument, Id } from '../lib/model/types';
+import type { FittingType, HeadrouteDocument, Id, PipeFittings } from '../lib/model/types';
+import { fittingsListText } from '../lib/report/pipeFittingsTable';
 import { profile } from '../lib/solver/profile';
 import { defaultRoute, RouteError } from '../lib/solver/route';
 import { lowestVapourMargin, routeFindings, routeName } from '../lib/solver/routeFindings';
@@ -51,6 +52,20 @@ export interface FittingRow {
   lossCoefficient: number | null;
 }
 
+/** A pipe that carries fittings (its fittings list and lumped K, not drawn as nodes). */
+export interface PipeFittingsRow {
+  id: Id;
+  name: string;
+  /** The list as the document holds it. */
+  fittings: PipeFittings;
+  /** The list in words, e.g. "6 × 90° elbow (3-K); lumped K 0.8". */
+  text: string;
+  /** K of the list at the solved flow (referred to the pipe's velocity); null when unsolved. */
+  fittingK: number | null;
+  /** Loss of the list, m; null when unsolved. */
+  fittingLoss: number | null;
+}
+
 /** The lowest margin to vapour pressure along the default route. */
 export interface RouteSummary {
   name: string;
@@ -82,6 +97,8 @@ export interface SolveReport {
   pumps: PumpRow[];
   controlValves: ControlValveRow[];
   fittings: FittingRow[];
+  /** Pipes that carry fittings lists (in `pipes` their loss is `fittingLoss`). */
+  pipeFittings: PipeFittingsRow[];
   route: RouteSummary | null;
   /** The solver's findings, then those along the default route (located by chainage). */
   findings: Finding[];
@@ -189,6 +206,19 @@ export function solveReport(
       lossCoefficient: r.lossCoefficient ?? null,
     });
   }
+  const pipeFittings: PipeFittingsRow[] = [];
+  for (const [id, pipe] of Object.entries(doc.pipes)) {
+    if (!pipe.fittings) continue;
+    const r = result.pipes[id];
+    pipeFittings.push({
+      id,
+      name: pipe.name || id,
+      fittings: pipe.fittings,
+      text: fittingsListText(pipe.fittings),
+      fittingK: r?.fittingK ?? null,
+      fittingLoss: r ? (r.fittingLoss ?? 0) : null,
+    });
+  }
   const route = routeSummary(doc, result);
   const findings = [...result.findings, ...(route?.findings ?? [])];
   const place = route?.place ?? new Map<Id, number>();
@@ -215,6 +245,7 @@ export function solveReport(
     pumps: inRouteOrder(pumps, place),
     controlValves: inRouteOrder(controlValves, place),
     fittings: inRouteOrder(fittings, place),
+    pipeFittings: inRouteOrder(pipeFittings, place),
     route: route?.summary ?? null,
     findings,
     counts,

@@ -182,9 +182,14 @@ export function pumpsTable(doc: HeadrouteDocument, result: SolveResult, fmt: For
     const r = result.pumps[n.id];
     const on = n.running;
     const mode = n.mode === 'duty' ? `duty ${fmt.q(n.dutyFlow, 'volumeFlow')}` : 'rating';
+    const flanges =
+      n.suctionElevation !== undefined || n.dischargeElevation !== undefined
+        ? `; flanges: suction ${fmt.q(n.suctionElevation ?? n.z, 'elevation')}, discharge ${fmt.q(n.dischargeElevation ?? n.z, 'elevation')}`
+        : '';
     rows.push([
       n.name || n.id,
-      on ? `on, ${Math.round(n.speed)} of ${Math.round(n.ratedSpeed)} rpm, ${mode}` : 'off',
+      (on ? `on, ${Math.round(n.speed)} of ${Math.round(n.ratedSpeed)} rpm, ${mode}` : 'off') +
+        flanges,
       num(fmt.q(r?.flow, 'volumeFlow')),
       num(fmt.q(r?.head, 'head')),
       num(fmt.q(r?.npshAvailable, 'head', 3)),
@@ -216,6 +221,7 @@ export function pumpsTable(doc: HeadrouteDocument, result: SolveResult, fmt: For
 }
 
 function vesselInputs(n: SheetNode, fmt: Formatter): string {
+  if (n.kind === 'junction') return `fixed draw-off ${fmt.q(n.outflow ?? 0, 'volumeFlow')}`;
   if (n.kind === 'boundary')
     return n.holds === 'flow'
       ? `fixed outflow ${fmt.q(n.outflow ?? 0, 'volumeFlow')}`
@@ -226,11 +232,12 @@ function vesselInputs(n: SheetNode, fmt: Formatter): string {
   return `${gas}; level ${fmt.q(n.liquidLevel, 'elevation')}; bottom ${fmt.q(n.z, 'elevation')}; nozzles ${nozzles}`;
 }
 
-/** Vessels and boundaries: inputs and the pressure and flow at each port. */
+/** Vessels, boundaries and branch points with a draw-off: inputs and the pressure and flow at each port. */
 export function vesselsTable(doc: HeadrouteDocument, result: SolveResult, fmt: Formatter): string {
   const rows: Cell[][] = [];
   for (const n of Object.values(doc.nodes)) {
-    if (n.kind !== 'vessel' && n.kind !== 'boundary') continue;
+    const drawOff = n.kind === 'junction' && n.outflow !== undefined;
+    if (n.kind !== 'vessel' && n.kind !== 'boundary' && !drawOff) continue;
     const ports = result.nodes[n.id]?.ports ?? {};
     const portText = Object.entries(ports)
       .map(
@@ -240,7 +247,7 @@ export function vesselsTable(doc: HeadrouteDocument, result: SolveResult, fmt: F
       .join('; ');
     rows.push([
       n.name || n.id,
-      n.kind === 'vessel' ? 'vessel' : 'boundary',
+      n.kind === 'vessel' ? 'vessel' : n.kind === 'junction' ? 'branch point' : 'boundary',
       vesselInputs(n, fmt),
       portText || NOT_A_VALUE,
       num(fmt.q(netPipeOutflow(doc, result, n.id), 'volumeFlow')),

@@ -29,6 +29,7 @@ import {
 } from './elementTables';
 import { escapeHtml, sectionHtml } from './html';
 import { methodsHtml } from './methods';
+import { pipeFittingsTable } from './pipeFittingsTable';
 import { REVIEW_SHEET_CSS } from './printCss';
 import { sheetDrawingSvg } from './sheetDrawing';
 
@@ -140,6 +141,14 @@ function caseOverridesText(doc: HeadrouteDocument, caseId: Id): string {
     }
     if (v.outflow !== undefined) {
       parts.push(`${name(id)} outflow ${formatQuantity(v.outflow, 'volumeFlow', system)}`);
+    }
+  }
+  for (const [id, v] of Object.entries(o.valves ?? {})) {
+    if (v.closed !== undefined) parts.push(`${name(id)} ${v.closed ? 'shut' : 'open'}`);
+  }
+  for (const [id, v] of Object.entries(o.junctions ?? {})) {
+    if (v.outflow !== undefined) {
+      parts.push(`${name(id)} draw-off ${formatQuantity(v.outflow, 'volumeFlow', system)}`);
     }
   }
   return parts.length ? parts.join('; ') : 'no changes from the base case';
@@ -275,6 +284,7 @@ export function reviewSheetHtml(doc: HeadrouteDocument, options: ReviewSheetOpti
       `Elements — ${caseName}`,
       [
         pipesTable(working, result, fmt),
+        pipeFittingsTable(working, result, fmt),
         fittingsTable(working, result, fmt),
         controlValvesTable(working, result, fmt),
         pumpsTable(working, result, fmt),

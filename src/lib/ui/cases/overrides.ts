@@ -14,7 +14,9 @@ export type OverrideField =
   | { kind: 'vessel'; id: Id; field: 'liquidLevel' | 'gasPressureAbs' }
   | { kind: 'pump'; id: Id; field: 'running' | 'speed' | 'mode' | 'dutyFlow' }
   | { kind: 'controlValve'; id: Id; field: 'opening' }
-  | { kind: 'boundary'; id: Id; field: 'pressureAbs' | 'outflow' };
+  | { kind: 'boundary'; id: Id; field: 'pressureAbs' | 'outflow' }
+  | { kind: 'valve'; id: Id; field: 'closed' }
+  | { kind: 'junction'; id: Id; field: 'outflow' };
 
 /** A value an override can hold. */
 export type OverrideValue = number | boolean | string | LiquidChoice;
@@ -24,6 +26,8 @@ const GROUP = {
   pump: 'pumps',
   controlValve: 'controlValves',
   boundary: 'boundaries',
+  valve: 'valves',
+  junction: 'junctions',
 } as const;
 
 /** The field's override, or undefined when the case leaves it as the base. */

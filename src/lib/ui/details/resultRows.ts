@@ -116,6 +116,7 @@ export function pipeResultRows(
       value: f((r.frictionLoss / pipe.length) * (system === 'US' ? 30.48 : 100), 'head'),
     });
   rows.push({ label: 'Entrance/exit loss', value: f(r.endLosses, 'head') });
+  if (pipe.fittings) rows.push({ label: 'Fittings loss', value: f(r.fittingLoss ?? 0, 'head') });
 
   const pressureAt = (head: number | undefined, z: number | undefined) =>
     head === undefined || z === undefined ? undefined : atm + rhoG * (head - z);
