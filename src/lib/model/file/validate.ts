@@ -33,8 +33,8 @@ export function validateDocument(value: unknown): ValidationResult {
   if (!parsed.success) {
     return { ok: false, errors: capped(parsed.issues.map((i) => issueToProblem(i, value))) };
   }
-  const document = parsed.output as HeadrouteDocument;
-  const elements = Object.keys(document.nodes).length + Object.keys(document.pipes).length;
+  const doc = parsed.output as HeadrouteDocument;
+  const elements = Object.keys(doc.nodes).length + Object.keys(doc.pipes).length;
   if (elements > MAX_ELEMENTS) {
     return {
       ok: false,
@@ -46,7 +46,7 @@ export function validateDocument(value: unknown): ValidationResult {
       ],
     };
   }
-  const problems = checkIntegrity(document);
+  const problems = checkIntegrity(doc);
   if (problems.length > 0) return { ok: false, errors: capped(problems) };
-  return { ok: true, document };
+  return { ok: true, document: doc };
 }

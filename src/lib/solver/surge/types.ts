@@ -19,7 +19,7 @@ export type SurgeEvent =
 
 /** Options of one surge run. */
 export interface SurgeOptions {
-  /** Operating case to start from (its steady solve); null or absent: the base document. */
+  /** Operating case to start from (its steady solve); null or absent: the base case. */
   caseId?: Id | null;
   /** Route (node ids in order); absent: a stored or default route through the event element. */
   route?: Id[] | null;
