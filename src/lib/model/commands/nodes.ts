@@ -5,7 +5,8 @@ import { ID_PREFIX, nextId } from '../ids';
 import { MAX_COORDINATE, MAX_ELEMENTS } from '../file/limits';
 import { NodeSchema } from '../file/schema';
 import { nodeLabel } from '../labels';
-import type { Id, NodeKind, SheetNode } from '../types';
+import type { Draft } from 'immer';
+import type { HeadrouteDocument, Id, NodeKind, SheetNode } from '../types';
 import type { Command } from './command';
 import { assignPatch, checkNewId, validateRecord } from './check';
 import { commandErrors } from './errors';
@@ -133,19 +134,27 @@ export function deleteElements(ids: readonly Id[]): Command {
         if (nodes.has(pipe.from.node) || nodes.has(pipe.to.node)) delete draft.pipes[pipeId];
       }
       for (const id of nodes) delete draft.nodes[id];
-      for (const [routeId, route] of Object.entries(draft.routes)) {
-        if (!route.nodes.some((n) => nodes.has(n))) continue;
-        const kept = route.nodes.filter((n) => !nodes.has(n));
-        if (kept.length < 2) delete draft.routes[routeId];
-        else route.nodes = kept;
-      }
-      for (const c of Object.values(draft.cases)) {
-        for (const [field] of CASE_NODE_GROUPS) {
-          const map = c.overrides[field];
-          if (!map) continue;
-          for (const id of nodes) if (Object.hasOwn(map, id)) delete map[id];
-        }
-      }
+      forgetNodes(draft, nodes);
     },
   };
+}
+
+/**
+ * Take deleted nodes out of stored routes (a route left with fewer than two nodes goes) and out
+ * of every case's overrides. Shared by delete and by the survey import, which replaces waypoints.
+ */
+export function forgetNodes(draft: Draft<HeadrouteDocument>, removed: ReadonlySet<Id>): void {
+  for (const [routeId, route] of Object.entries(draft.routes)) {
+    if (!route.nodes.some((n) => removed.has(n))) continue;
+    const kept = route.nodes.filter((n) => !removed.has(n));
+    if (kept.length < 2) delete draft.routes[routeId];
+    else route.nodes = kept;
+  }
+  for (const c of Object.values(draft.cases)) {
+    for (const [field] of CASE_NODE_GROUPS) {
+      const map = c.overrides[field];
+      if (!map) continue;
+      for (const id of removed) if (Object.hasOwn(map, id)) delete map[id];
+    }
+  }
 }

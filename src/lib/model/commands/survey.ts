@@ -8,7 +8,6 @@ import { createNode, createPipe } from '../defaults';
 import { MAX_ELEMENTS } from '../file/limits';
 import { NodeSchema, PipeSchema } from '../file/schema';
 import { ID_PREFIX, idInUse, nextId } from '../ids';
-import { CASE_NODE_GROUPS } from '../caseTargets';
 import { portPosition } from '../ports';
 import { simplifyProfile } from '../survey/simplifyProfile';
 import type { SurveyPoint } from '../survey/parseSurvey';
@@ -17,6 +16,7 @@ import type { HeadrouteDocument, Id, Pipe, PipeFittings, PortRef, SheetNode } fr
 import type { Command } from './command';
 import { assignPatch, plain, validateRecord } from './check';
 import { commandErrors } from './errors';
+import { forgetNodes } from './nodes';
 
 /** Hands out fresh ids for one prefix: one scan of the document, then counting up. */
 function idCounter(doc: HeadrouteDocument, prefix: string): () => Id {
@@ -116,18 +116,7 @@ export function importSurvey(
       const removed = new Set(run.waypoints);
       for (const id of run.pipes) delete draft.pipes[id];
       for (const id of run.waypoints) delete draft.nodes[id];
-      for (const [routeId, route] of Object.entries(draft.routes)) {
-        if (!route.nodes.some((n) => removed.has(n))) continue;
-        const left = route.nodes.filter((n) => !removed.has(n));
-        if (left.length < 2) delete draft.routes[routeId];
-        else route.nodes = left;
-      }
-      for (const c of Object.values(draft.cases)) {
-        for (const [field] of CASE_NODE_GROUPS) {
-          const map = c.overrides[field];
-          if (map) for (const id of removed) if (Object.hasOwn(map, id)) delete map[id];
-        }
-      }
+      forgetNodes(draft, removed);
 
       const a = portPosition(plain(draft.nodes[run.start.node]) as SheetNode, run.start.port);
       const b = portPosition(plain(draft.nodes[run.end.node]) as SheetNode, run.end.port);
